@@ -31,7 +31,10 @@ async function main() {
   const dir = join(process.cwd(), "scripts", "bench");
   const files = readdirSync(dir).filter((f) => f.endsWith(".ts") && (!only || f.includes(only))).sort();
   const suites: { file: string; suite: BenchSuite }[] = [];
-  for (const f of files) suites.push({ file: f, suite: (await import(pathToFileURL(join(dir, f)).href)) as BenchSuite });
+  for (const f of files) {
+    const mod = (await import(pathToFileURL(join(dir, f)).href)) as Partial<BenchSuite>;
+    if (typeof mod.run === "function") suites.push({ file: f, suite: mod as BenchSuite });
+  }
   suites.sort((a, b) => (a.suite.order ?? 50) - (b.suite.order ?? 50));
   const out: string[] = [];
   for (const { file, suite } of suites) {
