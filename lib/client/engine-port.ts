@@ -1,0 +1,20 @@
+import type { Finding } from "@/lib/engine/checks/types";
+import type { Derived } from "@/lib/engine/derive-types";
+import type { Footprint } from "@/lib/engine/fixtures/types";
+import type { PlanDocument, PlanSettings } from "@/lib/engine/plan/schema";
+
+/** Result of reading a typed length: millimetres, or a message saying what is wrong. */
+export type LengthRead = { ok: true; mm: number } | { ok: false; message: string };
+
+/**
+ * What the editor needs from the engine. The live implementation (engine-live.ts) calls the
+ * engine; tests may pass a small stand-in so the store and tools are tested on their own.
+ */
+export interface EnginePort {
+  derive(doc: PlanDocument, previous?: { doc: PlanDocument; derived: Derived }): Derived;
+  evaluate(doc: PlanDocument, derived: Derived): Finding[];
+  defaultParams(kind: string): Record<string, unknown>;
+  footprint(kind: string, params: Record<string, unknown>, doc: PlanDocument): Footprint;
+  formatLength(mm: number, settings: PlanSettings): string;
+  parseLength(text: string, settings: PlanSettings): LengthRead;
+}

@@ -1,0 +1,67 @@
+import { createStore } from "zustand/vanilla";
+import type { Vec2 } from "@/lib/engine/geometry/types";
+import type { Placement } from "@/lib/engine/plan/schema";
+
+export type ViewMode = "orbit" | "plan" | "elevation";
+export type PanelTab = "room" | "layout" | "checks" | "parts" | "history";
+
+/** A fixture about to be placed, shown as a ghost under the pointer. */
+export interface Ghost {
+  kind: string;
+  placement: Placement;
+}
+
+/** A tape measure laid in the view: two floor points, mm. */
+export interface Measurement {
+  from: Vec2;
+  to: Vec2;
+  done: boolean;
+}
+
+/** Editor state that is not part of the document and is never undone. */
+export interface UiState {
+  selection: string[];
+  hovered: string | null;
+  view: ViewMode;
+  /** The wall shown in elevation view. */
+  elevationWallId: string | null;
+  /** Bumped to ask the camera to frame these fixtures (empty: the whole room). */
+  frameRequest: { ids: string[]; n: number };
+  /** Grid step for dragging and nudging, mm. */
+  gridStepMm: number;
+  /** The larger step (Shift), mm. */
+  bigStepMm: number;
+  snapping: boolean;
+  tool: string;
+  /** The fixture kind chosen in the catalogue while placing. */
+  placingKind: string | null;
+  ghost: Ghost | null;
+  measurement: Measurement | null;
+  helpOpen: boolean;
+  tab: PanelTab;
+  /** Polite live-region text for screen readers (what the last command did). */
+  announcement: string;
+}
+
+export function createUiStore(init: Partial<UiState> = {}) {
+  return createStore<UiState>()(() => ({
+    selection: [],
+    hovered: null,
+    view: "orbit",
+    elevationWallId: null,
+    frameRequest: { ids: [], n: 0 },
+    gridStepMm: 25.4,
+    bigStepMm: 304.8,
+    snapping: true,
+    tool: "idle",
+    placingKind: null,
+    ghost: null,
+    measurement: null,
+    helpOpen: false,
+    tab: "layout",
+    announcement: "",
+    ...init,
+  }));
+}
+
+export type UiStore = ReturnType<typeof createUiStore>;

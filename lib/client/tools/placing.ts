@@ -1,0 +1,66 @@
+import type { FixtureDoc, Placement } from "@/lib/engine/plan/schema";
+import type { Editor } from "../editor";
+import { addFixture } from "../store/fixture-ops";
+import { newId } from "../store/ids";
+import { createIdle } from "./idle";
+import { wallSpans, SNAP_THRESHOLD_MM } from "./neighbours";
+import { snapAlongWall, snapToGrid } from "./snap";
+import type { PointerInput, ToolState } from "./types";
+import { alongWall } from "./wall-math";
+
+/** Where a new fixture of `kind` would go for this pointer: centred on the pointer, snapped. */
+export function placementFor(ed: Editor, kind: string, params: Record<string, unknown>, input: PointerInput): Placement | null {
+  const fp = ed.engine.footprint(kind, params, ed.doc);
+  const ui = ed.ui.getState();
+  const snap = ui.snapping && !input.alt;
+  if (input.hit?.type === "wall") {
+    const wall = ed.wall(input.hit.wallId);
+    if (!wall) return null;
+    const { offsetMm } = snapAlongWall({
+      offsetMm: alongWall(wall, input.point) - fp.widthMm / 2,
+      widthMm: fp.widthMm,
+      wallLengthMm: wall.lengthMm,
+      neighbours: wallSpans(ed, wall.id, new Set()),
+      gridStepMm: ui.gridStepMm,
+      thresholdMm: SNAP_THRESHOLD_MM,
+      enabled: snap,
+    });
+    return { mode: "wall", wallId: wall.id, offsetMm, elevationMm: 0 };
+  }
+  if (input.hit?.type === "floor") {
+    const g = (v: number) => (snap ? snapToGrid(v, ui.gridStepMm) : v);
+    return { mode: "free", xMm: g(input.point.x - fp.widthMm / 2), yMm: g(input.point.y - fp.depthMm / 2), rotationDeg: 0, elevationMm: 0 };
+  }
+  return null;
+}
+
+/** Placing a fixture chosen in the catalogue: a ghost follows the pointer; a press on a wall or the floor puts it there. Shift keeps placing. */
+export function createPlacing(kind: string): ToolState {
+  let params: Record<string, unknown> = {};
+  return {
+    id: "placing",
+    enter(ed) {
+      params = ed.engine.defaultParams(kind);
+      ed.ui.setState({ placingKind: kind, ghost: null });
+    },
+    exit(ed) {
+      ed.ui.setState({ placingKind: null, ghost: null });
+    },
+    move(ed, input) {
+      const placement = placementFor(ed, kind, params, input);
+      ed.ui.setState({ ghost: placement ? { kind, placement } : null });
+    },
+    down(ed, input) {
+      const placement = placementFor(ed, kind, params, input);
+      if (!placement) return;
+      const fixture: FixtureDoc = { id: newId("fx"), kind, label: "", placement, params: structuredClone(params) };
+      ed.edit((doc) => addFixture(doc, fixture));
+      ed.select([fixture.id]);
+      ed.announce(`Placed ${kind}.`);
+      if (!input.shift) ed.tools.go(createIdle());
+    },
+    cancel(ed) {
+      ed.tools.go(createIdle());
+    },
+  };
+}
