@@ -7,7 +7,7 @@ export default [
   ...nextVitals,
   ...nextTs,
   {
-    ignores: [".next/**", "node_modules/**", ".data/**", "migrations/**", "next-env.d.ts", "test-results/**", "playwright-report/**", "tests/artifacts/**"],
+    ignores: [".next/**", ".next-test/**", "node_modules/**", ".data/**", "migrations/**", "next-env.d.ts", "test-results/**", "playwright-report/**", "tests/artifacts/**"],
   },
   {
     rules: {

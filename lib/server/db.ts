@@ -1,0 +1,23 @@
+import "server-only";
+import { MikroORM } from "@mikro-orm/postgresql";
+import type { EntityManager } from "@mikro-orm/postgresql";
+import config from "../../mikro-orm.config";
+import { env } from "./env";
+
+const g = globalThis as unknown as { __bwOrm?: Promise<MikroORM> };
+
+/** The one ORM instance of this process (cached on globalThis for dev reloads). */
+export function getOrm(): Promise<MikroORM> {
+  if (!g.__bwOrm) {
+    g.__bwOrm = MikroORM.init({ ...config, clientUrl: env().DATABASE_URL }).catch((e: unknown) => {
+      g.__bwOrm = undefined;
+      throw e;
+    });
+  }
+  return g.__bwOrm;
+}
+
+/** A fresh EntityManager for one request; never share it across requests. */
+export async function requestEm(): Promise<EntityManager> {
+  return (await getOrm()).em.fork();
+}

@@ -1,0 +1,19 @@
+import bcrypt from "bcryptjs";
+
+const COMMON = ["password", "123456", "qwerty", "letmein", "benchwright", "woodshop", "garage", "iloveyou", "admin", "welcome"];
+
+/** The password rule: at least 10 characters, letters plus a digit or symbol, nothing common, not the e-mail name. Returns a message or null. */
+export function passwordProblem(password: string, email = ""): string | null {
+  if (password.length < 10) return "Use at least 10 characters.";
+  if (password.length > 200) return "Use at most 200 characters.";
+  if (!/[A-Za-z]/.test(password) || !/[^A-Za-z]/.test(password)) return "Mix letters with at least one digit or symbol.";
+  const lower = password.toLowerCase();
+  if (COMMON.some((w) => lower.includes(w))) return "That password is too easy to guess: avoid common words.";
+  const name = email.split("@")[0]?.toLowerCase();
+  if (name && name.length >= 4 && lower.includes(name)) return "Do not use your e-mail name in the password.";
+  if (new Set(lower).size < 5) return "Use more different characters.";
+  return null;
+}
+
+export const hashPassword = (p: string) => bcrypt.hash(p, 11);
+export const checkPassword = (p: string, hash: string) => bcrypt.compare(p, hash);

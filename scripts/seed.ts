@@ -1,0 +1,40 @@
+/**
+ * Demo data, idempotent: three accounts and one demo plan for the member, set in a garage of our
+ * own invention. Running it again changes nothing that exists.
+ */
+import { MikroORM } from "@mikro-orm/postgresql";
+import config from "../mikro-orm.config";
+import { UserSchema, type AccountRole } from "../entities/User";
+import { PlanSchema } from "../entities/Plan";
+import { hashPassword } from "../lib/server/passwords";
+import { demoDocument } from "./demo-document";
+
+export const DEMO_PASSWORD = "sawdust-and-pine-42";
+const ACCOUNTS: { email: string; name: string; role: AccountRole }[] = [
+  { email: "robin@demo.benchwright.test", name: "Robin Alder", role: "member" },
+  { email: "ines@demo.benchwright.test", name: "Ines Larch", role: "instructor" },
+  { email: "avery@demo.benchwright.test", name: "Avery Birch", role: "admin" },
+];
+
+async function main() {
+  const orm = await MikroORM.init({ ...config, clientUrl: process.env.DATABASE_URL ?? config.clientUrl });
+  const em = orm.em.fork();
+  const hash = await hashPassword(DEMO_PASSWORD);
+  for (const a of ACCOUNTS) {
+    const found = await em.findOne(UserSchema, { email: a.email });
+    if (!found) em.create(UserSchema, { ...a, passwordHash: hash, emailVerifiedAt: new Date() });
+  }
+  await em.flush();
+  const robin = await em.findOneOrFail(UserSchema, { email: ACCOUNTS[0].email });
+  if (!(await em.count(PlanSchema, { owner: robin.id, name: "Two-car garage shop" }))) {
+    const document = demoDocument();
+    em.create(PlanSchema, { owner: robin, name: "Two-car garage shop", units: document.settings.units, document: document as unknown as Record<string, unknown>, version: 1 });
+    await em.flush();
+  }
+  await orm.close();
+}
+
+main().catch((e) => {
+  console.error("seeding failed:", e);
+  process.exit(1);
+});
