@@ -24,6 +24,7 @@ const envSchema = z.object({
   S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true"),
   /** Failed sign-ins allowed per account and per IP in the window below. */
   AUTH_MAX_FAILURES: z.coerce.number().int().min(1).default(8),
+  AUTH_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).default(200),
   AUTH_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
 });
 

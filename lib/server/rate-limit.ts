@@ -5,13 +5,16 @@ import { env } from "./env";
 /** Keys a failed sign-in counts against: the account and the client address. */
 export const attemptKeys = (email: string, ip: string) => [`acct:${email.toLowerCase()}`, `ip:${ip}`];
 
-/** True when any key has reached the failure limit within the window (kept in PostgreSQL, so it holds across instances). */
+/**
+ * True when a key has reached its failure limit within the window (kept in PostgreSQL, so it holds
+ * across instances). An address gets a larger allowance than an account: many people can share one.
+ */
 export async function isLimited(em: EntityManager, keys: string[]): Promise<boolean> {
-  const { AUTH_MAX_FAILURES, AUTH_WINDOW_MINUTES } = env();
+  const { AUTH_MAX_FAILURES, AUTH_MAX_FAILURES_PER_IP, AUTH_WINDOW_MINUTES } = env();
   const since = new Date(Date.now() - AUTH_WINDOW_MINUTES * 60_000);
   for (const key of keys) {
     const n = await em.count(LoginAttemptSchema, { key, createdAt: { $gte: since } });
-    if (n >= AUTH_MAX_FAILURES) return true;
+    if (n >= (key.startsWith("ip:") ? AUTH_MAX_FAILURES_PER_IP : AUTH_MAX_FAILURES)) return true;
   }
   return false;
 }

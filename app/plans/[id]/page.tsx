@@ -1,0 +1,24 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import { PlanViewer } from "@/components/plans/PlanViewer";
+import { requestEm } from "@/lib/server/db";
+import { AppError } from "@/lib/server/errors";
+import { currentUser } from "@/lib/server/session";
+import { getPlan } from "@/lib/server/services/plans";
+
+export const metadata: Metadata = { title: "Plan" };
+
+export default async function PlanPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const em = await requestEm();
+  const user = await currentUser(em);
+  if (!user) redirect(`/signin?callbackUrl=/plans/${id}`);
+  if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
+  try {
+    const plan = await getPlan(em, user, id);
+    return <PlanViewer name={plan.name} document={plan.document} />;
+  } catch (e) {
+    if (e instanceof AppError && (e.status === 404 || e.status === 403)) notFound();
+    throw e;
+  }
+}
