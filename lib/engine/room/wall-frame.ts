@@ -1,0 +1,39 @@
+import type { Vec2 } from "../geometry/types";
+import type { SolvedRoom } from "./types";
+
+/** A wall's own frame: origin at its start corner, `along` toward its end, `inward` into the room (unit vectors; lengths mm). */
+export interface WallFrame {
+  wallId: string;
+  origin: Vec2;
+  along: Vec2;
+  inward: Vec2;
+  /** Solved length of the wall, mm. */
+  lengthMm: number;
+}
+
+/** The frame of a wall by id, or undefined when the room has no such wall. */
+export function wallFrame(room: SolvedRoom, wallId: string): WallFrame | undefined {
+  const w = room.walls.find((x) => x.id === wallId);
+  if (!w) return undefined;
+  return { wallId: w.id, origin: w.start, along: w.dir, inward: w.inward, lengthMm: w.solvedLengthMm ?? Math.hypot(w.end.x - w.start.x, w.end.y - w.start.y) };
+}
+
+/** World point (mm) of a spot `offsetAlongMm` from the wall's start and `distanceFromWallMm` out into the room. */
+export function wallToWorld(frame: WallFrame, offsetAlongMm: number, distanceFromWallMm: number): Vec2 {
+  return {
+    x: frame.origin.x + frame.along.x * offsetAlongMm + frame.inward.x * distanceFromWallMm,
+    y: frame.origin.y + frame.along.y * offsetAlongMm + frame.inward.y * distanceFromWallMm,
+  };
+}
+
+/** The inverse of wallToWorld: a world point's offset along the wall and distance out from it, mm. */
+export function worldToWall(frame: WallFrame, p: Vec2): { offsetAlongMm: number; distanceFromWallMm: number } {
+  const dx = p.x - frame.origin.x;
+  const dy = p.y - frame.origin.y;
+  return { offsetAlongMm: dx * frame.along.x + dy * frame.along.y, distanceFromWallMm: dx * frame.inward.x + dy * frame.inward.y };
+}
+
+/** Heading of the wall, radians counter-clockwise from +x: the turn a fixture set against it takes. */
+export function wallHeading(frame: WallFrame): number {
+  return Math.atan2(frame.along.y, frame.along.x);
+}
