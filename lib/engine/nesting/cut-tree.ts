@@ -1,0 +1,89 @@
+import type { Rect } from "./guillotine";
+
+/** A cut found by splitting a panel: `axis` "y" is a rip (a line of constant y along the sheet). */
+export interface TreeCut {
+  level: number;
+  axis: "x" | "y";
+  /** Near edge of the kerf on the cut axis, mm. */
+  at: number;
+  /** The panel the cut splits, edge to edge. */
+  panel: Rect;
+}
+
+export interface CutTree {
+  cuts: TreeCut[];
+  /** Empty panels left when every piece is free. */
+  leaves: Rect[];
+}
+
+const EPS = 1e-6;
+
+function lo(r: Rect, axis: "x" | "y"): number {
+  return axis === "x" ? r.x : r.y;
+}
+function hi(r: Rect, axis: "x" | "y"): number {
+  return axis === "x" ? r.x + r.w : r.y + r.h;
+}
+
+/** Cut positions on one axis that cross no piece: gaps of at least a kerf between groups, and the waste past the last group. */
+function cutsOn(panel: Rect, items: Rect[], axis: "x" | "y", kerf: number): number[] {
+  const sorted = [...items].sort((a, b) => lo(a, axis) - lo(b, axis));
+  const cuts: number[] = [];
+  const start = lo(panel, axis);
+  const end = hi(panel, axis);
+  if (sorted.length > 0 && lo(sorted[0], axis) - start > EPS) {
+    // Waste before the first piece: cut just short of it.
+    cuts.push(lo(sorted[0], axis) - kerf);
+  }
+  let maxEnd = -Infinity;
+  for (const r of sorted) {
+    if (maxEnd > -Infinity && lo(r, axis) >= maxEnd + kerf - EPS) cuts.push(maxEnd);
+    maxEnd = Math.max(maxEnd, hi(r, axis));
+  }
+  if (end - maxEnd > EPS) cuts.push(maxEnd);
+  return cuts;
+}
+
+/**
+ * Split a panel recursively with edge-to-edge cuts until each piece stands alone. Rips (cuts
+ * along the sheet's length) are tried first, then each strip is crosscut, alternating by level.
+ * Throws when the pieces cannot be separated by guillotine cuts.
+ */
+export function buildCutTree(panel: Rect, items: Rect[], kerf: number): CutTree {
+  const tree: CutTree = { cuts: [], leaves: [] };
+  splitPanel(panel, items, kerf, 1, "y", tree);
+  return tree;
+}
+
+function splitPanel(panel: Rect, items: Rect[], kerf: number, level: number, prefer: "x" | "y", tree: CutTree): void {
+  if (panel.w <= EPS || panel.h <= EPS) return;
+  if (items.length === 0) {
+    tree.leaves.push(panel);
+    return;
+  }
+  for (const axis of prefer === "y" ? (["y", "x"] as const) : (["x", "y"] as const)) {
+    const at = cutsOn(panel, items, axis, kerf);
+    if (at.length === 0) continue;
+    let from = lo(panel, axis);
+    const end = hi(panel, axis);
+    const bounds = [...at.map((c) => [c, c + kerf] as const)];
+    for (const c of at) {
+      tree.cuts.push({ level, axis, at: c, panel });
+    }
+    const pieces: [number, number][] = [];
+    for (const [c0, c1] of bounds) {
+      pieces.push([from, Math.max(from, c0)]);
+      from = Math.min(end, c1);
+    }
+    pieces.push([from, end]);
+    for (const [a, b] of pieces) {
+      if (b - a <= EPS) continue;
+      const sub: Rect = axis === "y" ? { x: panel.x, y: a, w: panel.w, h: b - a } : { x: a, y: panel.y, w: b - a, h: panel.h };
+      const inside = items.filter((r) => lo(r, axis) >= a - EPS && hi(r, axis) <= b + EPS);
+      splitPanel(sub, inside, kerf, level + 1, axis === "y" ? "x" : "y", tree);
+    }
+    return;
+  }
+  if (items.length === 1) return; // the panel is the piece
+  throw new Error(`pieces cannot be separated by guillotine cuts (${items.length} in a ${panel.w} x ${panel.h} panel)`);
+}

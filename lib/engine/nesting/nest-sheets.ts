@@ -1,0 +1,188 @@
+import type { Part } from "../fixtures/types";
+import type { Material } from "../plan/schema";
+import { sheetLowerBound } from "./bounds";
+import { buildCutTree } from "./cut-tree";
+import type { PackItem, PackOutcome, PackStock, PackedSheet } from "./guillotine";
+import { DEFAULT_REUSABLE_MIN_LENGTH_MM, DEFAULT_REUSABLE_MIN_WIDTH_MM, DEFAULT_TRIM_MM, sheetGroups } from "./pieces";
+import type { SheetGroup } from "./pieces";
+import { searchLayouts } from "./search";
+import type { Cut, MaterialNest, NestOptions, NestResult, Offcut, Placement, SheetLayout, SheetStock, UnplacedPart } from "./types";
+
+const DEFAULT_BUDGET_MS = 600;
+const EPS = 1e-6;
+
+/**
+ * Nest the sheet-good parts (stock "sheet") onto sheets of their own material and thickness, with
+ * guillotine cuts, kerf and edge trim; grained parts keep their grain along the sheet's length.
+ * Lengths mm, areas mm2, times ms. Pure: inputs are not changed.
+ */
+export function nestSheets(parts: readonly Part[], materials: readonly Material[], opts: NestOptions): NestResult {
+  const t0 = performance.now();
+  const groups = sheetGroups(parts, materials);
+  const total = groups.reduce((s, g) => s + g.pieces.length, 0);
+  const budget = opts.timeBudgetMs ?? DEFAULT_BUDGET_MS;
+  const out: MaterialNest[] = [];
+  let stopped = false;
+  let spent = 0;
+  for (const g of groups) {
+    // Share the budget by piece count; unspent time rolls over to later materials.
+    const share = total > 0 ? (budget * g.pieces.length) / total : budget;
+    const deadline = Math.min(t0 + budget, performance.now() + share + Math.max(0, spent));
+    const before = performance.now();
+    const r = nestGroup(g, opts, deadline, (f, attempts, best, lb) => {
+      if (!opts.onProgress) return true;
+      const fraction = Math.min(1, (performance.now() - t0) / budget);
+      return opts.onProgress({ fraction, materialId: g.materialId, bestSheets: best, lowerBound: lb, attempts }) !== false;
+    });
+    spent = share - (performance.now() - before);
+    out.push(r.nest);
+    if (r.stopped) {
+      stopped = true;
+      // Remaining materials still get a quick, single-heuristic layout so the result is complete.
+      opts = { ...opts, maxAttempts: 1, onProgress: undefined };
+    }
+  }
+  return { materials: out, unplaced: out.flatMap((m) => m.unplaced), elapsedMs: performance.now() - t0, stopped };
+}
+
+function stocksFor(g: SheetGroup, opts: NestOptions): SheetStock[] {
+  const trim = opts.trimMm ?? DEFAULT_TRIM_MM;
+  const offcuts: SheetStock[] = (opts.offcuts ?? [])
+    .filter((o) => o.materialId === g.materialId && o.qty > 0)
+    .map((o) => ({
+      id: o.id,
+      materialId: o.materialId,
+      lengthMm: Math.max(o.lengthMm, o.widthMm),
+      widthMm: Math.min(o.lengthMm, o.widthMm),
+      qty: o.qty,
+      source: "offcut" as const,
+      trimMm: 0,
+    }))
+    .sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm);
+  const sheet: SheetStock = { id: `${g.materialId}-sheet`, materialId: g.materialId, lengthMm: g.sheetLengthMm, widthMm: g.sheetWidthMm, qty: Infinity, source: "new", trimMm: trim };
+  return [...offcuts, sheet];
+}
+
+function nestGroup(
+  g: SheetGroup,
+  opts: NestOptions,
+  deadline: number,
+  tick: (f: number, attempts: number, best: number, lb: number) => boolean,
+): { nest: MaterialNest; stopped: boolean } {
+  const kerf = opts.kerfMm;
+  const stocks = stocksFor(g, opts);
+  const newStock = stocks.length - 1;
+  const pack: PackStock[] = stocks.map((s) => ({ len: s.lengthMm - 2 * s.trimMm, wid: s.widthMm - 2 * s.trimMm, qty: s.qty }));
+  const items: PackItem[] = [];
+  const unplacedCount = new Map<string, UnplacedPart>();
+  g.pieces.forEach((p, id) => {
+    const mode = p.grain === "length" ? 0 : p.grain === "width" ? 1 : 2;
+    const it: PackItem = { id, len: p.lengthMm, wid: p.widthMm, mode };
+    const fitsAny = pack.some((s) => (mode !== 1 && it.len <= s.len + EPS && it.wid <= s.wid + EPS) || (mode !== 0 && it.wid <= s.len + EPS && it.len <= s.wid + EPS));
+    if (fitsAny) items.push(it);
+    else {
+      const u = unplacedCount.get(p.partId);
+      if (u) u.qty++;
+      else
+        unplacedCount.set(p.partId, {
+          partId: p.partId,
+          name: p.name,
+          qty: 1,
+          reason: `larger than the usable sheet (${pack[newStock].len.toFixed(1)} x ${pack[newStock].wid.toFixed(1)} mm after trim${mode !== 2 ? ", grain fixed" : ""})`,
+        });
+    }
+  });
+  const offcutArea = stocks.slice(0, newStock).reduce((s, o) => s + (o.lengthMm + kerf) * (o.widthMm + kerf) * o.qty, 0);
+  const lowerBound = sheetLowerBound(
+    items.map((i) => ({ lengthMm: i.len, widthMm: i.wid })),
+    pack[newStock].len,
+    pack[newStock].wid,
+    kerf,
+    offcutArea,
+  );
+  let stopped = false;
+  let outcome: PackOutcome = { sheets: [], leftover: [] };
+  let strategy = "none";
+  let attempts = 0;
+  if (items.length > 0) {
+    const res = searchLayouts(items, pack, kerf, newStock, {
+      deadline,
+      maxAttempts: opts.maxAttempts ?? Infinity,
+      lowerBound,
+      seed: opts.seed ?? 1,
+      tick: (n, best) => tick(0, n, best, lowerBound),
+    });
+    outcome = res.outcome;
+    strategy = res.strategy;
+    attempts = res.attempts;
+    stopped = res.stopped;
+  }
+  const sheets = outcome.sheets.map((s, i) => layoutSheet(s, i + 1, stocks[s.stock], g, kerf, opts));
+  const partAreaMm2 = sheets.reduce((s, l) => s + l.partAreaMm2, 0);
+  const stockAreaMm2 = sheets.reduce((s, l) => s + l.lengthMm * l.widthMm, 0);
+  return {
+    stopped,
+    nest: {
+      materialId: g.materialId,
+      materialName: g.materialName,
+      thicknessMm: g.thicknessMm,
+      sheetLengthMm: g.sheetLengthMm,
+      sheetWidthMm: g.sheetWidthMm,
+      sheets,
+      sheetsUsed: sheets.filter((s) => s.source === "new").length,
+      offcutsUsed: sheets.filter((s) => s.source === "offcut").length,
+      lowerBound,
+      partAreaMm2,
+      stockAreaMm2,
+      yieldPct: stockAreaMm2 > 0 ? (100 * partAreaMm2) / stockAreaMm2 : 0,
+      wasteMm2: stockAreaMm2 - partAreaMm2,
+      unplaced: [...unplacedCount.values()],
+      attempts,
+      strategy,
+    },
+  };
+}
+
+function layoutSheet(s: PackedSheet, index: number, stock: SheetStock, g: SheetGroup, kerf: number, opts: NestOptions): SheetLayout {
+  const t = stock.trimMm;
+  const placements: Placement[] = s.items.map((it) => {
+    const p = g.pieces[it.id];
+    return { pieceKey: p.key, partId: p.partId, name: p.name, xMm: it.x + t, yMm: it.y + t, lenMm: it.w, widMm: it.h, rotated: it.rotated, grain: p.grain };
+  });
+  const usable = { x: t, y: t, w: stock.lengthMm - 2 * t, h: stock.widthMm - 2 * t };
+  const tree = buildCutTree(
+    usable,
+    placements.map((p) => ({ x: p.xMm, y: p.yMm, w: p.lenMm, h: p.widMm })),
+    kerf,
+  );
+  // Saw order: level by level (the sheet's rips, then each strip's crosscuts...), rips before crosscuts, near edge first.
+  const ordered = [...tree.cuts].sort((a, b) => a.level - b.level || (a.axis === b.axis ? 0 : a.axis === "y" ? -1 : 1) || a.panel.y - b.panel.y || a.panel.x - b.panel.x || a.at - b.at);
+  const cuts: Cut[] = ordered.map((c, i) => ({
+    seq: i + 1,
+    level: c.level,
+    kind: c.axis === "y" ? "rip" : "crosscut",
+    x1Mm: c.axis === "y" ? c.panel.x : c.at,
+    y1Mm: c.axis === "y" ? c.at : c.panel.y,
+    x2Mm: c.axis === "y" ? c.panel.x + c.panel.w : c.at,
+    y2Mm: c.axis === "y" ? c.at : c.panel.y + c.panel.h,
+  }));
+  const minW = opts.reusableMinWidthMm ?? DEFAULT_REUSABLE_MIN_WIDTH_MM;
+  const minL = opts.reusableMinLengthMm ?? DEFAULT_REUSABLE_MIN_LENGTH_MM;
+  const offcuts: Offcut[] = tree.leaves
+    .filter((r) => Math.min(r.w, r.h) >= 1)
+    .map((r) => ({ xMm: r.x, yMm: r.y, lenMm: r.w, widMm: r.h, reusable: Math.min(r.w, r.h) >= minW - EPS && Math.max(r.w, r.h) >= minL - EPS }));
+  const partAreaMm2 = placements.reduce((a, p) => a + p.lenMm * p.widMm, 0);
+  return {
+    index,
+    stockId: stock.id,
+    source: stock.source,
+    lengthMm: stock.lengthMm,
+    widthMm: stock.widthMm,
+    trimMm: t,
+    placements,
+    cuts,
+    offcuts,
+    partAreaMm2,
+    yieldPct: (100 * partAreaMm2) / (stock.lengthMm * stock.widthMm),
+  };
+}
