@@ -32,6 +32,8 @@ export interface UiState {
   /** The larger step (Shift), mm. */
   bigStepMm: number;
   snapping: boolean;
+  /** Draw every keep-clear zone, not only failing ones, the room's and the selection's. */
+  showAllZones: boolean;
   tool: string;
   /** The fixture kind chosen in the catalogue while placing. */
   placingKind: string | null;
@@ -53,6 +55,7 @@ export function createUiStore(init: Partial<UiState> = {}) {
     gridStepMm: 25.4,
     bigStepMm: 304.8,
     snapping: true,
+    showAllZones: false,
     tool: "idle",
     placingKind: null,
     ghost: null,

@@ -1,0 +1,50 @@
+"use client";
+import { Html, Line } from "@react-three/drei";
+import type { SolvedWall } from "@/lib/engine/room/types";
+import { useEditor } from "@/lib/client/react/EditorContext";
+import { useDerived, useDoc, useUi } from "@/lib/client/react/useEditorState";
+
+type P3 = [number, number, number];
+
+/** A dimension line from a to b along a wall, offset by `off` mm (negative: outside the room), with end ticks and a label. */
+function Dim({ wall, from, to, off, text, testId }: { wall: SolvedWall; from: number; to: number; off: number; text: string; testId?: string }) {
+  const at = (t: number, o: number): P3 => [wall.start.x + wall.dir.x * t + wall.inward.x * o, wall.start.y + wall.dir.y * t + wall.inward.y * o, 5];
+  const tick = 60;
+  return (
+    <group>
+      <Line points={[at(from, off), at(to, off)]} color="#2a1c12" lineWidth={1.2} />
+      <Line points={[at(from, off - tick), at(from, off + tick)]} color="#2a1c12" lineWidth={1.2} />
+      <Line points={[at(to, off - tick), at(to, off + tick)]} color="#2a1c12" lineWidth={1.2} />
+      <Html position={at((from + to) / 2, off)} center className="pointer-events-none">
+        <span className="whitespace-nowrap rounded bg-paper px-1 text-[11px] font-semibold text-walnut-900" data-testid={testId}>
+          {text}
+        </span>
+      </Html>
+    </group>
+  );
+}
+
+/** Plan and elevation dimensions: every wall's length outside the room; the selected wall fixture's distances to the wall ends. */
+export function DimensionLines() {
+  const ed = useEditor();
+  const view = useUi((s) => s.view);
+  const selection = useUi((s) => s.selection);
+  const walls = useDerived((s) => s.derived?.room.walls ?? []);
+  const sel = useDoc((d) => (selection.length === 1 ? d.fixtures.find((f) => f.id === selection[0]) : undefined));
+  const selWidth = useDerived((s) => (sel ? s.fixtureById.get(sel.id)?.footprint.widthMm : undefined));
+  if (view === "orbit") return null;
+  const selWall = sel?.placement.mode === "wall" ? walls.find((w) => sel.placement.mode === "wall" && w.id === sel.placement.wallId) : undefined;
+  return (
+    <group name="dimensions">
+      {walls.map((w, i) => (
+        <Dim key={w.id} wall={w} from={0} to={w.lengthMm} off={-350} text={`${i + 1}: ${ed.formatLength(w.lengthMm)}`} testId={`dim-wall-${i + 1}`} />
+      ))}
+      {selWall && sel?.placement.mode === "wall" && selWidth !== undefined ? (
+        <>
+          <Dim wall={selWall} from={0} to={sel.placement.offsetMm} off={-150} text={ed.formatLength(sel.placement.offsetMm)} testId="dim-offset" />
+          <Dim wall={selWall} from={sel.placement.offsetMm + selWidth} to={selWall.lengthMm} off={-150} text={ed.formatLength(selWall.lengthMm - sel.placement.offsetMm - selWidth)} />
+        </>
+      ) : null}
+    </group>
+  );
+}

@@ -1,0 +1,55 @@
+"use client";
+import { Canvas } from "@react-three/fiber";
+import type { Editor } from "@/lib/client/editor";
+import { EditorProvider } from "@/lib/client/react/EditorContext";
+import { CameraRig } from "./CameraRig";
+import { DimensionLines } from "./DimensionLines";
+import { FixtureInstances } from "./fixtures/FixtureInstances";
+import { FrameCounter } from "./FrameCounter";
+import { Ghost, TapeLine } from "./GhostAndTape";
+import { PointerBridge } from "./PointerBridge";
+import { RoomLayer } from "./RoomLayer";
+import { SelectionOutline } from "./SelectionOutline";
+import { M } from "./units";
+import { ZonesLayer } from "./ZonesLayer";
+
+/**
+ * The editor's 3D view (client only; loaded with next/dynamic, ssr: false). The engine's mm are
+ * scaled to metres by the root group. The canvas draws on demand: edits and camera moves ask for frames.
+ * The provider is repeated inside because the canvas renders in its own React root.
+ */
+export default function EditorCanvas({ editor, label }: { editor: Editor; label: string }) {
+  return (
+    <Canvas
+      data-testid="plan-canvas"
+      frameloop="demand"
+      dpr={[1, 1.5]}
+      gl={{ preserveDrawingBuffer: true, antialias: true }}
+      tabIndex={0}
+      aria-label={label}
+      role="img"
+      className="h-full w-full touch-none rounded-lg outline-none focus-visible:ring-2 focus-visible:ring-amberline-500"
+    >
+      <EditorProvider editor={editor}>
+        <color attach="background" args={["#ece3d0"]} />
+        <ambientLight intensity={0.75} />
+        <directionalLight position={[6, -8, 12]} intensity={1.1} />
+        <hemisphereLight args={["#ffffff", "#b89c80", 0.35]} />
+        <CameraRig />
+        <group scale={M}>
+          <group name="pickables">
+            <RoomLayer />
+            <FixtureInstances />
+          </group>
+          <ZonesLayer />
+          <SelectionOutline />
+          <Ghost />
+          <TapeLine />
+          <DimensionLines />
+        </group>
+        <PointerBridge />
+        <FrameCounter />
+      </EditorProvider>
+    </Canvas>
+  );
+}

@@ -1,0 +1,96 @@
+"use client";
+import { useThree } from "@react-three/fiber";
+import { useEffect } from "react";
+import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
+import type { PointerInput } from "@/lib/client/tools/types";
+import { useEditor } from "@/lib/client/react/EditorContext";
+import { aim, onLevel, onWallPlane, pickHit, wallNear } from "./pick";
+
+/**
+ * Turns pointer events on the canvas into tool events in plan coordinates. Listens in the capture
+ * phase so a press on a fixture stops the camera controls before they start orbiting.
+ */
+export function PointerBridge() {
+  const ed = useEditor();
+  const gl = useThree((s) => s.gl);
+  const camera = useThree((s) => s.camera);
+  const scene = useThree((s) => s.scene);
+  const controls = useThree((s) => s.controls) as OrbitControlsImpl | null;
+
+  useEffect(() => {
+    const el = gl.domElement;
+    let grabZ = 0;
+    let downAt: { x: number; y: number } | null = null;
+
+    const roots = () => {
+      const g = scene.getObjectByName("pickables");
+      return g ? [g] : [];
+    };
+
+    const toInput = (e: PointerEvent, withHit: boolean): PointerInput | null => {
+      const ray = aim(e, el, camera);
+      const room = ed.derived.getState().derived?.room;
+      const view = ed.ui.getState().view;
+      const elevWall = ed.ui.getState().elevationWallId ?? room?.walls[0]?.id;
+      const mods = { shift: e.shiftKey, mod: e.ctrlKey || e.metaKey, alt: e.altKey };
+      const picked = withHit ? pickHit(ray, roots()) : null;
+      let point: { x: number; y: number } | null = null;
+      if (view === "elevation" && room && elevWall) point = onWallPlane(ray, room, elevWall);
+      else point = onLevel(ray, withHit ? (picked?.hit.type === "fixture" ? picked.zMm : 0) : grabZ);
+      if (!point) return null;
+      let hit = picked?.hit ?? null;
+      if (view === "elevation" && !hit && elevWall) hit = { type: "wall", wallId: elevWall };
+      if (hit?.type === "floor" && room && ed.ui.getState().tool === "placing" && !e.altKey) hit = wallNear(room, point) ?? hit;
+      if (picked?.hit.type === "fixture") grabZ = view === "elevation" ? 0 : picked.zMm;
+      return { point: { x: point.x, y: point.y }, hit, ...mods };
+    };
+
+    const setOrbit = (on: boolean) => {
+      if (controls) controls.enabled = on;
+    };
+
+    const down = (e: PointerEvent) => {
+      if (e.button !== 0) return;
+      const tool = ed.ui.getState().tool;
+      const input = toInput(e, true);
+      if (!input) return;
+      downAt = { x: e.clientX, y: e.clientY };
+      if (tool === "idle" && input.hit?.type !== "fixture") return; // empty space: let the camera orbit; a click clears on release
+      setOrbit(false);
+      el.setPointerCapture(e.pointerId);
+      ed.tools.down(input);
+      el.focus({ preventScroll: true });
+    };
+
+    const move = (e: PointerEvent) => {
+      const tool = ed.ui.getState().tool;
+      if (tool === "idle") return;
+      const input = toInput(e, tool === "placing");
+      if (input) ed.tools.move(input);
+    };
+
+    const up = (e: PointerEvent) => {
+      if (e.button !== 0) return;
+      const tool = ed.ui.getState().tool;
+      const input = toInput(e, false);
+      if (tool === "idle" && downAt && Math.hypot(e.clientX - downAt.x, e.clientY - downAt.y) < 4 && input && !e.shiftKey) ed.select([]);
+      else if (input) ed.tools.up(input);
+      downAt = null;
+      setOrbit(true);
+      if (el.hasPointerCapture(e.pointerId)) el.releasePointerCapture(e.pointerId);
+    };
+
+    el.addEventListener("pointerdown", down, { capture: true });
+    el.addEventListener("pointermove", move);
+    el.addEventListener("pointerup", up);
+    el.addEventListener("pointercancel", up);
+    return () => {
+      el.removeEventListener("pointerdown", down, { capture: true });
+      el.removeEventListener("pointermove", move);
+      el.removeEventListener("pointerup", up);
+      el.removeEventListener("pointercancel", up);
+    };
+  }, [ed, gl, camera, scene, controls]);
+
+  return null;
+}

@@ -1,0 +1,77 @@
+"use client";
+import { memo, useMemo } from "react";
+import { Shape } from "three";
+import type { Opening } from "@/lib/engine/plan/schema";
+import type { SolvedRoom, SolvedWall } from "@/lib/engine/room/types";
+import { useDerived, useDoc } from "@/lib/client/react/useEditorState";
+import { prismGeometry } from "./prism";
+
+const WALL_THICKNESS_MM = 100;
+
+function WallMesh({ wall, heightMm }: { wall: SolvedWall; heightMm: number }) {
+  // Walls stand outside the floor polygon so fixtures' backs sit on the inner face.
+  const cx = (wall.start.x + wall.end.x) / 2 - (wall.inward.x * WALL_THICKNESS_MM) / 2;
+  const cy = (wall.start.y + wall.end.y) / 2 - (wall.inward.y * WALL_THICKNESS_MM) / 2;
+  return (
+    <mesh position={[cx, cy, heightMm / 2]} rotation={[0, 0, Math.atan2(wall.dir.y, wall.dir.x)]} userData={{ pick: "wall", wallId: wall.id }}>
+      <boxGeometry args={[wall.lengthMm + WALL_THICKNESS_MM * 2, WALL_THICKNESS_MM, heightMm]} />
+      <meshStandardMaterial color="#efe7da" transparent opacity={0.5} depthWrite={false} />
+    </mesh>
+  );
+}
+
+const openingColour: Record<Opening["kind"], string> = { "entry-door": "#8a6a48", "garage-door": "#9aa5b1", window: "#a9c7d8" };
+
+function OpeningMesh({ opening, wall }: { opening: Opening; wall: SolvedWall }) {
+  const bottom = opening.kind === "window" ? opening.sillMm : 0;
+  const along = opening.offsetMm + opening.widthMm / 2;
+  const x = wall.start.x + wall.dir.x * along - (wall.inward.x * WALL_THICKNESS_MM) / 2;
+  const y = wall.start.y + wall.dir.y * along - (wall.inward.y * WALL_THICKNESS_MM) / 2;
+  return (
+    <mesh position={[x, y, bottom + opening.heightMm / 2]} rotation={[0, 0, Math.atan2(wall.dir.y, wall.dir.x)]} userData={{ pick: "wall", wallId: wall.id }}>
+      <boxGeometry args={[opening.widthMm, WALL_THICKNESS_MM * 1.2, opening.heightMm]} />
+      <meshStandardMaterial color={openingColour[opening.kind]} transparent opacity={0.8} />
+    </mesh>
+  );
+}
+
+const Floor = memo(function Floor({ room }: { room: SolvedRoom }) {
+  const shape = useMemo(() => {
+    const s = new Shape();
+    room.corners.forEach((c, i) => (i === 0 ? s.moveTo(c.x, c.y) : s.lineTo(c.x, c.y)));
+    s.closePath();
+    return s;
+  }, [room]);
+  return (
+    <mesh userData={{ pick: "floor" }} receiveShadow>
+      <shapeGeometry args={[shape]} />
+      <meshStandardMaterial color="#d9cdb8" />
+    </mesh>
+  );
+});
+
+/** The solved floor, walls with their openings, and the obstacles. Re-renders only when the room changes. */
+export function RoomLayer() {
+  const room = useDerived((s) => s.derived?.room ?? null);
+  const obstacles = useDerived((s) => s.derived?.obstacles ?? null);
+  const openings = useDoc((d) => d.room.openings);
+  if (!room) return null;
+  const wallById = new Map(room.walls.map((w) => [w.id, w]));
+  return (
+    <group name="room">
+      <Floor room={room} />
+      {room.walls.map((w) => (
+        <WallMesh key={w.id} wall={w} heightMm={room.ceilingHeightMm} />
+      ))}
+      {openings.map((o) => {
+        const w = wallById.get(o.wallId);
+        return w ? <OpeningMesh key={o.id} opening={o} wall={w} /> : null;
+      })}
+      {obstacles?.map((o) => (
+        <mesh key={o.id} geometry={prismGeometry(o.body)} userData={{ pick: "obstacle", id: o.id }}>
+          <meshStandardMaterial color={o.kind === "panel" ? "#36414e" : "#7a8794"} transparent opacity={o.kind === "parking-bay" ? 0.25 : 0.9} />
+        </mesh>
+      ))}
+    </group>
+  );
+}
