@@ -16,6 +16,10 @@ export interface Finding {
   shortfall?: number;
   unit?: "mm" | "deg" | "mm/m" | "kg" | "%";
   message: string;
+  /** The fixture or zone the finding is about; incremental re-checks replace findings by subject. */
+  subjectId?: string;
+  /** Where the problem is, on the floor (mm), when the rule can say (e.g. where a stock path is blocked). */
+  at?: { x: number; y: number };
 }
 
 /** Where a rule's numbers come from. */
@@ -38,4 +42,8 @@ export interface Rule<D = unknown> {
   severity: Severity;
   cautions: string[];
   evaluate(plan: PlanDocument, derived: D): Finding[];
+  /** Kind of subject: "fixture" rules can re-check a few fixtures after a move; "plan" rules always re-run whole. */
+  scope?: "fixture" | "plan";
+  /** Evaluate only the findings whose subject is one of these fixture ids (incremental re-check after a move). */
+  evaluateFor?(plan: PlanDocument, derived: D, subjectIds: ReadonlySet<string>): Finding[];
 }

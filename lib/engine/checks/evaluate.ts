@@ -1,0 +1,128 @@
+import type { Derived } from "../derive-types";
+import type { PlacedFixture } from "../fixtures/types";
+import type { Bounds2 } from "../geometry/types";
+import type { PlanDocument } from "../plan/schema";
+import { buildContext, fixtureSolid, solidKey, zoneItem, type CheckContext, type EvaluateOptions } from "./context";
+import { boundsOverlap, expandBounds, polygonBounds, unionBounds } from "./geom/polygon";
+import { isMiterStation } from "./kinds";
+import { RULES } from "./registry";
+import type { Finding, Rule } from "./types";
+
+/** Severity order for sorting: conflicts first. */
+const ORDER = { conflict: 0, caution: 1, advice: 2 } as const;
+
+/** Conflicts first, then cautions, then advice; failing before passing; then by rule order. */
+export function sortFindings(list: Finding[]): Finding[] {
+  const ruleIndex = new Map(RULES.map((r, i) => [r.id, i]));
+  return [...list].sort(
+    (a, b) =>
+      Number(a.pass) - Number(b.pass) ||
+      ORDER[a.severity] - ORDER[b.severity] ||
+      (ruleIndex.get(a.ruleId) ?? 99) - (ruleIndex.get(b.ruleId) ?? 99) ||
+      (a.subjectId ?? "").localeCompare(b.subjectId ?? "") ||
+      a.message.localeCompare(b.message),
+  );
+}
+
+function runRule(rule: Rule<CheckContext>, plan: PlanDocument, ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
+  try {
+    return ids && rule.evaluateFor ? rule.evaluateFor(plan, ctx, ids) : rule.evaluate(plan, ctx);
+  } catch (e) {
+    // One broken rule must not hide the others' findings.
+    return [{ ruleId: rule.id, severity: "caution", pass: false, fixtureIds: [], zoneIds: [], subjectId: rule.id, message: `This check could not run: ${(e as Error).message}` }];
+  }
+}
+
+/** Evaluates every rule on a derived plan; lengths in mm. `opts.preset` overrides rule numbers. */
+export function evaluatePlan(plan: PlanDocument, derived: Derived, opts: EvaluateOptions = {}): Finding[] {
+  const ctx = buildContext(plan, derived, opts);
+  return sortFindings(RULES.flatMap((r) => runRule(r, plan, ctx)));
+}
+
+/** How far a fixture's checks reach, on the floor: its body and zones, grown by the walkway, or by the longest stock for a saw. */
+function reachBounds(f: PlacedFixture, ctx: CheckContext): Bounds2 {
+  let b = polygonBounds(f.body.polygon);
+  for (const z of f.zones) b = unionBounds(b, polygonBounds(z.prism.polygon));
+  const grow = isMiterStation(f) ? Math.max(ctx.numbers.longestStockMm, ctx.numbers.walkwayMm) : ctx.numbers.walkwayMm;
+  return expandBounds(b, grow + 1);
+}
+
+/** A checker that keeps its indexes and findings, and re-checks only what a moved fixture can affect. */
+export interface IncrementalChecker {
+  findings(): Finding[];
+  /** Re-check after fixtures moved or changed: pass the new plan and its derived results, and the ids that changed. */
+  update(plan: PlanDocument, derived: Derived, changedIds: readonly string[]): Finding[];
+  /** The fixture ids the last update re-checked (for tests and benchmarks). */
+  lastRechecked(): ReadonlySet<string>;
+}
+
+/** Starts an incremental checker with a full evaluation. */
+export function createChecker(plan: PlanDocument, derived: Derived, opts: EvaluateOptions = {}): IncrementalChecker {
+  let ctx = buildContext(plan, derived, opts);
+  let current = RULES.flatMap((r) => runRule(r, plan, ctx));
+  let rechecked: ReadonlySet<string> = new Set();
+  return {
+    findings: () => sortFindings(current),
+    lastRechecked: () => rechecked,
+    update(nextPlan, nextDerived, changedIds) {
+      const changed = new Set(changedIds);
+      // Areas touched: each changed fixture's old and new extent (body and zones).
+      const touched: Bounds2[] = [];
+      for (const id of changed) {
+        const before = ctx.fixtureById.get(id);
+        if (before) touched.push(expandBounds(unionAll(before), 1));
+      }
+      const nextById = new Map(nextDerived.fixtures.map((f) => [f.id, f]));
+      for (const id of changed) {
+        const after = nextById.get(id);
+        if (after) touched.push(expandBounds(unionAll(after), 1));
+      }
+      // Same room, same obstacles: patch the indexes in place instead of rebuilding them.
+      const oldCtx = ctx;
+      for (const id of changed) {
+        const before = oldCtx.fixtureById.get(id);
+        if (before) {
+          oldCtx.solids.remove(solidKey({ id, source: "fixture" }));
+          for (const z of before.zones) oldCtx.zoneIndex.remove(z.id);
+        }
+        const after = nextById.get(id);
+        if (after) {
+          const s = fixtureSolid(after);
+          oldCtx.solids.insert(solidKey(s), s.bounds, s);
+          for (const z of after.zones) oldCtx.zoneIndex.insert(z.id, polygonBounds(z.prism.polygon), zoneItem(z));
+        }
+      }
+      ctx = { ...oldCtx, ...nextDerived, plan: nextPlan, fixtureById: nextById, roomPolygon: nextDerived.room.corners };
+      // Subjects to re-check: changed fixtures, fixtures whose reach meets a touched area, and subjects of findings naming a changed fixture.
+      const subjects = new Set<string>(changed);
+      for (const f of nextDerived.fixtures) {
+        if (subjects.has(f.id)) continue;
+        const rb = reachBounds(f, ctx);
+        if (touched.some((t) => boundsOverlap(rb, t))) subjects.add(f.id);
+      }
+      for (const fd of current) if (fd.fixtureIds.some((x) => changed.has(x)) && fd.subjectId) for (const s of fd.subjectId.split("|")) subjects.add(s);
+      const next: Finding[] = [];
+      for (const rule of RULES) {
+        if (rule.scope === "fixture" && rule.evaluateFor) {
+          for (const fd of current) {
+            if (fd.ruleId !== rule.id) continue;
+            const keep = !(fd.subjectId ?? "").split("|").some((s) => subjects.has(s));
+            if (keep) next.push(fd);
+          }
+          next.push(...runRule(rule, nextPlan, ctx, subjects));
+        } else {
+          next.push(...runRule(rule, nextPlan, ctx));
+        }
+      }
+      current = next;
+      rechecked = subjects;
+      return sortFindings(current);
+    },
+  };
+}
+
+function unionAll(f: PlacedFixture): Bounds2 {
+  let b = polygonBounds(f.body.polygon);
+  for (const z of f.zones) b = unionBounds(b, polygonBounds(z.prism.polygon));
+  return b;
+}

@@ -1,0 +1,61 @@
+import { clearRun } from "../clear-run";
+import type { CheckContext } from "../context";
+import { finding } from "../finding";
+import { centroid } from "../geom/polygon";
+import { stripThroughZone } from "../geom/strip";
+import { PURPOSE } from "../kinds";
+import type { Finding, Rule } from "../types";
+
+const ID = "pull-out";
+const NAMES: Record<string, string> = { [PURPOSE.drawerPull]: "drawers", [PURPOSE.doorSwing]: "doors" };
+
+function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
+  const out: Finding[] = [];
+  for (const f of ctx.fixtures) {
+    if (ids && !ids.has(f.id)) continue;
+    for (const z of f.zones) {
+      const what = NAMES[z.purpose];
+      if (!what) continue;
+      const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
+      const run = clearRun(ctx, strip, { zLo: z.prism.zMin, zHi: z.prism.zMax, exclude: new Set([f.id]) });
+      const need = strip.length;
+      const ok = run.clearMm >= need - 0.5;
+      out.push(
+        finding(
+          ID,
+          "conflict",
+          ok,
+          f.id,
+          ok
+            ? `${f.label}: ${what} open fully (${ctx.len(need)}).`
+            : `${f.label}: ${what} open only ${ctx.len(run.clearMm)} of ${ctx.len(need)}${run.blocker ? ` before hitting ${run.blocker.label}` : ""}.`,
+          {
+            fixtureIds: run.blocker?.source === "fixture" ? [f.id, run.blocker.id] : [f.id],
+            zoneIds: [z.id],
+            measured: run.clearMm,
+            required: need,
+            shortfall: need - run.clearMm,
+            unit: "mm",
+            at: ok ? undefined : run.at,
+          },
+        ),
+      );
+    }
+  }
+  return out;
+}
+
+/** Drawers and doors of a fixture open fully without meeting anything. */
+export const pullOutRule: Rule<CheckContext> = {
+  id: ID,
+  title: "Drawers and doors open fully",
+  protects: "A drawer that stops against a neighbour or a post cannot be emptied, and people learn to yank it, which wrecks slides and pinches fingers.",
+  formula: "clear length in front of each drawer or door (at its height) >= its pull-out or swing depth",
+  numbers: [{ label: "Pull-out depth", value: "the drawer's slide length, or the door's width, as the fixture defines it" }],
+  sources: [{ citation: "Common cabinetmaking practice", status: "practice" }],
+  severity: "conflict",
+  cautions: [],
+  scope: "fixture",
+  evaluate: (_plan, ctx) => check(ctx),
+  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+};

@@ -1,0 +1,71 @@
+import { shelfSag } from "../../sag/shelf-sag";
+import { stiffnessOf } from "../../sag/moe";
+import type { CheckContext } from "../context";
+import { finding } from "../finding";
+import { stiffnessKeyFor } from "../stiffness-key";
+import type { Finding, Rule } from "../types";
+
+const ID = "shelf-sag";
+const LB_PER_KG = 1 / 0.45359237;
+const FT_PER_M = 1 / 0.3048;
+
+function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
+  const out: Finding[] = [];
+  const n = ctx.numbers;
+  const note = ctx.presetNote("sagLimitMmPerM", "shelfLoadKgPerM");
+  const lbPerFt = (n.shelfLoadKgPerM * LB_PER_KG) / FT_PER_M;
+  // One finding per distinct shelf size in a fixture: identical shelves sag alike.
+  const seen = new Set<string>();
+  for (const p of ctx.parts) {
+    if (!/shelf/i.test(p.name) || (ids && !ids.has(p.fixtureId))) continue;
+    const key = `${p.fixtureId}|${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const stiff = stiffnessKeyFor(p.materialId, ctx.plan.materials);
+    const r = shelfSag({ spanMm: p.lengthMm, depthMm: p.widthMm, thicknessMm: p.thicknessMm, stiffnessKey: stiff, uniformLbPerFt: lbPerFt });
+    const limitMm = (n.sagLimitMmPerM * p.lengthMm) / 1000;
+    const ok = r.deflectionMm <= limitMm + 1e-9;
+    const f = ctx.fixtureById.get(p.fixtureId);
+    const who = `${f?.label ?? p.fixtureId}: ${p.name.toLowerCase()} ${ctx.len(p.lengthMm)} span`;
+    const mat = stiffnessOf(stiff)?.name ?? stiff;
+    out.push(
+      finding(
+        ID,
+        "caution",
+        ok,
+        p.fixtureId,
+        ok
+          ? `${who} sags ${r.deflectionIn.toFixed(3)} in under ${lbPerFt.toFixed(0)} lb/ft (${mat}); within ${limitIn(limitMm)} in${note}.`
+          : `${who} sags ${r.deflectionIn.toFixed(3)} in under ${lbPerFt.toFixed(0)} lb/ft (${mat}), over the ${limitIn(limitMm)} in guide${note}: shorten the span, add a stiffening edge, or use thicker stock.`,
+        { fixtureIds: [p.fixtureId], measured: r.deflectionMm, required: limitMm, shortfall: r.deflectionMm - limitMm, unit: "mm" },
+      ),
+    );
+  }
+  return out;
+}
+
+const limitIn = (mmValue: number) => (mmValue / 25.4).toFixed(3);
+
+/** Shelf sag under a book-like load against 0.02 in per foot of span. */
+export const shelfSagRule: Rule<CheckContext> = {
+  id: ID,
+  title: "Shelf sag",
+  protects: "A shelf that sags shows it within weeks and keeps creeping; under a long-term load wood sags about half as much again.",
+  formula: "sag = 5 w L^4 / (384 E I), I = b t^3 / 12; sag <= 0.02 in per foot of span",
+  numbers: [
+    { label: "Sag guide", value: "0.02 in per foot of span (1/32 in per foot is visible)" },
+    { label: "Load", value: "20 lb per running foot (books)" },
+    { label: "Long-term factor", value: "1.5 (seasoned wood)" },
+  ],
+  sources: [
+    { citation: "AWC Design Aid No. 6, Beam Design Formulas (2007), fig. 1", status: "published" },
+    { citation: "USDA FPL Wood Handbook, FPL-GTR-190 (2010), Table 5-3b (stiffness)", status: "published" },
+    { citation: "Sag guide and book load: furniture-building practice", status: "practice" },
+    { citation: "AWC NDS 3.5.2: long-term deflection 1.5 x initial", status: "published" },
+  ],
+  severity: "caution",
+  cautions: [],
+  scope: "fixture",
+  evaluate: (_plan, ctx) => check(ctx),
+  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+};

@@ -1,0 +1,74 @@
+import { clearRun } from "../clear-run";
+import type { CheckContext } from "../context";
+import { finding } from "../finding";
+import { centroid } from "../geom/polygon";
+import { stripThroughZone } from "../geom/strip";
+import { PURPOSE, isTableSaw, worldWorkSurface } from "../kinds";
+import type { Finding, Rule } from "../types";
+
+const ID = "saw-infeed-outfeed";
+const NAMES: Record<string, string> = { [PURPOSE.infeed]: "infeed", [PURPOSE.outfeed]: "outfeed", [PURPOSE.sideClearance]: "side clearance" };
+
+function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
+  const out: Finding[] = [];
+  const n = ctx.numbers;
+  for (const f of ctx.fixtures) {
+    if (!isTableSaw(f) || (ids && !ids.has(f.id))) continue;
+    const table = worldWorkSurface(f) ?? f.body.zMax;
+    for (const z of f.zones) {
+      const name = NAMES[z.purpose];
+      if (!name) continue;
+      const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
+      const run = clearRun(ctx, strip, { zLo: table + n.flushToleranceMm, zHi: table + n.stockThicknessMm, exclude: new Set([f.id]) });
+      const need = strip.length;
+      const ok = run.clearMm >= need - 0.5;
+      const by = run.blocker ? ` (blocked by ${run.blocker.label})` : "";
+      out.push(
+        finding(
+          ID,
+          "conflict",
+          ok,
+          f.id,
+          ok
+            ? `${f.label}: ${name} clear for ${ctx.len(need)}.`
+            : `${f.label}: ${name} clear for only ${ctx.len(run.clearMm)} of ${ctx.len(need)}${by}. Roll the saw out on its mobile base before cutting, and lock the casters.`,
+          {
+            fixtureIds: run.blocker?.source === "fixture" ? [f.id, run.blocker.id] : [f.id],
+            zoneIds: [z.id],
+            measured: run.clearMm,
+            required: need,
+            shortfall: need - run.clearMm,
+            unit: "mm",
+            at: ok ? undefined : run.at,
+          },
+        ),
+      );
+    }
+  }
+  return out;
+}
+
+/** Infeed, outfeed and side clearance around a table saw, as its zones define them. */
+export const sawInfeedOutfeedRule: Rule<CheckContext> = {
+  id: ID,
+  title: "Infeed, outfeed and side room at the table saw",
+  protects:
+    "A board fed through a table saw needs its full length clear in front of the blade and behind it, and room beside the fence for wide sheets. A board that hits something mid-cut twists, binds the blade and can be thrown back.",
+  formula: "clear length in each zone (nothing between table height and table + stock thickness) >= the zone's length",
+  numbers: [
+    { label: "Infeed and outfeed", value: "the longest stock (plan setting), as the saw's zones are sized" },
+    { label: "Outfeed support with a helper", value: "about 4 ft past the blade" },
+  ],
+  sources: [
+    { citation: "Occupational safety guidance on table-saw outfeed support (secondary copy)", status: "published" },
+    { citation: "Zone lengths: common shop practice", status: "practice" },
+  ],
+  severity: "conflict",
+  cautions: [
+    "Use the blade guard, riving knife and anti-kickback pawls; stand out of line with the blade.",
+    "Lock the mobile base before cutting; a saw that rolls mid-cut is a kickback waiting to happen.",
+  ],
+  scope: "fixture",
+  evaluate: (_plan, ctx) => check(ctx),
+  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+};

@@ -1,0 +1,99 @@
+import type { Bounds2 } from "../../geometry/types";
+
+interface Entry<T> {
+  key: string;
+  bounds: Bounds2;
+  item: T;
+  stamp: number;
+  cells: number[];
+}
+
+/** Cells far outside any room stay distinct: 2^20 cells a side before keys wrap. */
+const SPAN = 1 << 20;
+const HALF = SPAN >> 1;
+
+/**
+ * A uniform grid over floor bounds (mm). Each item sits in every cell its bounds touch; a query
+ * visits only the cells it touches and reports each item once. Insert, remove and move are
+ * O(cells touched), so one fixture can move without rebuilding.
+ */
+export class GridIndex<T> {
+  private readonly cells = new Map<number, Entry<T>[]>();
+  private readonly entries = new Map<string, Entry<T>>();
+  private stamp = 0;
+
+  /** `cellMm`: cell edge, mm; about the size of a typical item works best. */
+  constructor(readonly cellMm = 600) {}
+
+  get size(): number {
+    return this.entries.size;
+  }
+
+  private cellRange(b: Bounds2): [number, number, number, number] {
+    const c = this.cellMm;
+    return [Math.floor(b.minX / c), Math.floor(b.minY / c), Math.floor(b.maxX / c), Math.floor(b.maxY / c)];
+  }
+
+  private static cellKey(ix: number, iy: number): number {
+    return (ix + HALF) * SPAN + (iy + HALF);
+  }
+
+  /** Adds an item under a unique key (replacing any item with that key). */
+  insert(key: string, bounds: Bounds2, item: T): void {
+    if (this.entries.has(key)) this.remove(key);
+    const e: Entry<T> = { key, bounds, item, stamp: -1, cells: [] };
+    const [x0, y0, x1, y1] = this.cellRange(bounds);
+    for (let ix = x0; ix <= x1; ix++) {
+      for (let iy = y0; iy <= y1; iy++) {
+        const k = GridIndex.cellKey(ix, iy);
+        let list = this.cells.get(k);
+        if (!list) {
+          list = [];
+          this.cells.set(k, list);
+        }
+        list.push(e);
+        e.cells.push(k);
+      }
+    }
+    this.entries.set(key, e);
+  }
+
+  /** Removes an item; returns false when the key was not there. */
+  remove(key: string): boolean {
+    const e = this.entries.get(key);
+    if (!e) return false;
+    for (const k of e.cells) {
+      const list = this.cells.get(k);
+      if (!list) continue;
+      const i = list.indexOf(e);
+      if (i >= 0) list.splice(i, 1);
+      if (!list.length) this.cells.delete(k);
+    }
+    this.entries.delete(key);
+    return true;
+  }
+
+  get(key: string): T | undefined {
+    return this.entries.get(key)?.item;
+  }
+
+  /** Every item whose bounds overlap `b` (bounds test only; callers do the exact test). */
+  query(b: Bounds2): T[] {
+    const out: T[] = [];
+    const s = ++this.stamp;
+    const [x0, y0, x1, y1] = this.cellRange(b);
+    for (let ix = x0; ix <= x1; ix++) {
+      for (let iy = y0; iy <= y1; iy++) {
+        const list = this.cells.get(GridIndex.cellKey(ix, iy));
+        if (!list) continue;
+        for (const e of list) {
+          if (e.stamp === s) continue;
+          e.stamp = s;
+          const eb = e.bounds;
+          if (eb.minX <= b.maxX && b.minX <= eb.maxX && eb.minY <= b.maxY && b.minY <= eb.maxY) out.push(e.item);
+        }
+      }
+    }
+    return out;
+  }
+}
