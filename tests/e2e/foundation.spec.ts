@@ -57,7 +57,7 @@ test("sign in with the demo account and see the demo plan", async ({ page }) => 
   await page.getByLabel("E-mail").fill("robin@demo.benchwright.test");
   await page.getByLabel("Password").fill("wrong-password-here");
   await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page.getByRole("alert")).toContainText("do not match");
+  await expect(page.getByText("That e-mail and password do not match an account.")).toBeVisible();
   await page.getByLabel("Password").fill("sawdust-and-pine-42");
   await page.getByRole("button", { name: "Sign in" }).click();
   await expect(page).toHaveURL(/\/plans$/);
