@@ -32,42 +32,38 @@ function usableDiagonals(n: number, diagonals: readonly Diagonal[], notes: strin
   });
 }
 
-/** Solve the shape from wall lengths and diagonals when they hold it rigid; null otherwise. */
-function fromDiagonals(lengths: number[], diagonals: Diagonal[], notes: string[]): Vec2[] | null {
+/** Every measured distance between corners: the walls, then the diagonals. */
+function observationsOf(lengths: readonly number[], diagonals: readonly Diagonal[]): DistanceObservation[] {
   const n = lengths.length;
-  const observations: DistanceObservation[] = [
-    ...lengths.map((lengthMm, i) => ({ a: i, b: (i + 1) % n, lengthMm })),
-    ...diagonals.map((d) => ({ a: d.from, b: d.to, lengthMm: d.lengthMm })),
-  ];
-  if (n === 4) {
-    let start: Vec2[] | null = null;
-    for (const d of diagonals) {
-      start = quadFromDiagonal(lengths, d);
-      if (start) break;
-      notes.push(`The walls and the ${d.from}-${d.to} diagonal (${mmText(d.lengthMm)}) cannot make two triangles: check that diagonal.`);
-    }
-    if (!start) return null;
-    // One diagonal fixes the shape exactly; with more, spread the disagreement by least squares.
-    if (diagonals.length < 2) return start;
-    const fitted = fitDistances(start, observations);
-    if (fitted) return fitted;
-    notes.push("The two diagonals could not be fitted together: the first one was used.");
-    return start;
-  }
-  if (diagonals.length < n - 3) {
-    notes.push(`A room of ${n} walls needs ${n - 3} diagonals to fix its shape; ${diagonals.length} given, so they were only compared.`);
-    return null;
-  }
-  return null;
+  return [...lengths.map((lengthMm, i) => ({ a: i, b: (i + 1) % n, lengthMm })), ...diagonals.map((d) => ({ a: d.from, b: d.to, lengthMm: d.lengthMm }))];
 }
 
-/** Fit a room of five or more walls to its diagonals, starting from the walked shape; null when they do not hold it. */
+/**
+ * A four-walled room from its walls and diagonals: exact from the first diagonal that fits, then,
+ * with two or more, the least-squares fit of all of them. Null when no diagonal fits the walls.
+ * `what` names the diagonals in notes ("diagonal", or "angle" when they come from measured angles).
+ */
+function quadFromDiagonals(lengths: number[], diagonals: Diagonal[], notes: string[], what: "diagonal" | "angle"): Vec2[] | null {
+  let start: Vec2[] | null = null;
+  for (const d of diagonals) {
+    start = quadFromDiagonal(lengths, d);
+    if (start) break;
+    notes.push(
+      what === "diagonal"
+        ? `The walls and the ${d.from}-${d.to} diagonal (${mmText(d.lengthMm)}) cannot make two triangles: check that diagonal.`
+        : `The measured angle between walls ${d.from} and ${(d.from + 1) % 4} does not fit the wall lengths: check it.`,
+    );
+  }
+  if (!start || diagonals.length < 2) return start;
+  const fitted = fitDistances(start, observationsOf(lengths, diagonals));
+  if (fitted) return fitted;
+  notes.push(`The measured ${what}s could not be fitted together: the first one that fits was used.`);
+  return start;
+}
+
+/** Fit a room of five or more walls to its diagonals, starting from the walked shape; null when they do not hold it rigid. */
 function fitManyWalls(lengths: number[], diagonals: Diagonal[], start: Vec2[], notes: string[]): Vec2[] | null {
-  const n = lengths.length;
-  const observations: DistanceObservation[] = [
-    ...lengths.map((lengthMm, i) => ({ a: i, b: (i + 1) % n, lengthMm })),
-    ...diagonals.map((d) => ({ a: d.from, b: d.to, lengthMm: d.lengthMm })),
-  ];
+  const observations = observationsOf(lengths, diagonals);
   const fitted = fitDistances(start, observations);
   if (fitted && signedArea(fitted) > 0 && maxResidual(fitted, observations) < 25) return fitted;
   notes.push("The diagonals do not hold this room's shape together: the corner angles were used and the diagonals only compared.");
@@ -88,6 +84,7 @@ function anglesToDiagonals(lengths: number[], anglesDeg: readonly (number | null
   return out;
 }
 
+/** Largest misfit between the corners and the measured distances, mm. */
 function maxResidual(corners: Vec2[], observations: readonly DistanceObservation[]): number {
   return observations.reduce((m, o) => Math.max(m, Math.abs(distance(corners[o.a], corners[o.b]) - o.lengthMm)), 0);
 }
@@ -114,15 +111,15 @@ export function solveRoom(input: RoomMeasurements): SolvedRoom {
     corners = triangleFromWalls(lengths);
     if (corners) method = "lengths";
     else notes.push("These three walls cannot make a triangle (one is longer than the other two together): check them.");
-  } else if (diagonals.length > 0 && n === 4) {
-    corners = fromDiagonals(lengths, diagonals, notes);
+  } else if (n === 4 && diagonals.length > 0) {
+    corners = quadFromDiagonals(lengths, diagonals, notes, "diagonal");
     if (corners) method = "diagonals";
   } else if (n === 4 && hasAngles) {
     // Four lengths and one angle fix a four-walled room: turn each measured angle into the diagonal across it.
-    corners = fromDiagonals(lengths, anglesToDiagonals(lengths, measuredAngles), notes);
+    corners = quadFromDiagonals(lengths, anglesToDiagonals(lengths, measuredAngles), notes, "angle");
     if (corners) method = "angles";
-  } else if (diagonals.length > 0) {
-    fromDiagonals(lengths, diagonals, notes);
+  } else if (n > 4 && diagonals.length > 0 && diagonals.length < n - 3) {
+    notes.push(`A room of ${n} walls needs ${n - 3} diagonals to fix its shape; with ${diagonals.length} they were only compared.`);
   }
 
   if (!corners) {

@@ -1,4 +1,5 @@
 import { describe, it, expect } from "vitest";
+import fc from "fast-check";
 import Fraction from "fraction.js";
 import { unit } from "mathjs";
 import { parseLength } from "@/lib/engine/units/parse-length";
@@ -53,6 +54,14 @@ describe("parseLength: what people type", () => {
     ["23 7/8 in", 606.425],
     [`2'`, 609.6],
     ["8 feet", 2438.4],
+    [`5'11"`, 1803.4],
+    ["6 1/2 inches", 165.1],
+    ["23 7/8''", 606.425],
+    ["1' 6 1/2", 469.9],
+    ["2 ft", 609.6],
+    ["1/2 in", 12.7],
+    [".5", 12.7],
+    ["7.", 177.8],
   ];
   for (const [text, expected] of cases) {
     it(`reads ${text}`, () => {
@@ -111,6 +120,17 @@ describe("parseLength: rejects with a message saying what was wrong", () => {
   }
   it("asks for an inch mark on a fraction typed in mm mode", () => {
     expect(messageOf(parseLength("7/8", metric))).toMatch(/inch mark/);
+  });
+  it("never throws, and every length it accepts is in range (random text)", () => {
+    const alphabet = fc.constantFrom(..."0123456789 ./-'\"ftinmc½".split(""));
+    fc.assert(
+      fc.property(fc.array(alphabet, { maxLength: 16 }).map((a) => a.join("")), fc.constantFrom("in", "ft-in", "mm" as const), (text, units) => {
+        const r = parseLength(text, { units });
+        if (r.ok) expect(r.mm > 0 && r.mm <= 100_000).toBe(true);
+        else expect(r.message.length).toBeGreaterThan(5);
+      }),
+      { numRuns: 3000 },
+    );
   });
   it("never throws on odd input", () => {
     for (const t of ["\"", "'", "--", "/", "mm", "in", "ft", "1e5", "NaN", "Infinity", "½'", "9".repeat(39)]) {
