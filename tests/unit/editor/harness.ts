@@ -36,6 +36,11 @@ export const stubEngine: EnginePort = {
     return derived;
   },
   evaluate: () => [],
+  kinds: () => [
+    { kind: "base", title: "Base", blurb: "A 600 mm box." },
+    { kind: "wide", title: "Wide", blurb: "A 1200 mm box." },
+  ],
+  paramsSchema: () => undefined,
   defaultParams: (kind) => ({ widthMm: kind === "wide" ? 1200 : 600 }),
   footprint: (_kind, params) => ({ widthMm: Number(params.widthMm ?? 600), depthMm: 600, heightMm: 900 }),
   formatLength: (mm) => `${Math.round(mm * 10) / 10} mm`,

@@ -1,0 +1,39 @@
+import { describe, it, expect } from "vitest";
+import { newPlanDocument } from "@/lib/engine/plan/defaults";
+import { Editor } from "@/lib/client/editor";
+import { liveEngine } from "@/lib/client/engine-live";
+import { createPlacing } from "@/lib/client/tools/placing";
+import { setParams } from "@/lib/client/store/fixture-ops";
+
+/** Places a kind on wall w3 with its left end at `offsetMm` (pointer at its centre, snapping off). */
+function place(ed: Editor, kind: string, offsetMm: number): string {
+  ed.ui.setState({ snapping: false });
+  const wall = ed.wall("w3")!;
+  const w = ed.engine.footprint(kind, ed.engine.defaultParams(kind), ed.doc).widthMm;
+  const along = offsetMm + w / 2;
+  ed.tools.go(createPlacing(kind));
+  ed.tools.down({ point: { x: wall.start.x + wall.dir.x * along, y: wall.start.y + wall.dir.y * along }, hit: { type: "wall", wallId: "w3" } });
+  return ed.selection[0];
+}
+
+describe("editor on the real engine", () => {
+  it("a tool shelf between two counters is flush on both sides; raising one counter breaks that side", () => {
+    const ed = new Editor({ doc: newPlanDocument(), engine: liveEngine });
+    const left = place(ed, "base-cabinet", 0);
+    const leftW = ed.footprint(left)!.widthMm;
+    const shelf = place(ed, "tool-shelf", leftW);
+    const right = place(ed, "base-cabinet", leftW + ed.footprint(shelf)!.widthMm);
+    const flush = () => ed.derived.getState().findings.filter((f) => f.ruleId === "table-flush");
+    // Tool shelf top = counter height - table height (TRADE.md, derived): flush on both sides.
+    expect(flush()).toHaveLength(2);
+    expect(flush().every((f) => f.pass)).toBe(true);
+    // Raise the right cabinet by 1 in: that side is 25.4 mm off, past the 1/32 in tolerance (plan setting).
+    const f = ed.fixture(right)!;
+    ed.edit((d) => setParams(d, right, { ...f.params, carcassHeightMm: Number(f.params.carcassHeightMm) + 25.4 }));
+    const failing = flush().filter((x) => !x.pass);
+    expect(failing).toHaveLength(1);
+    expect(failing[0].measured).toBeCloseTo(25.4, 3);
+    ed.history.undo();
+    expect(flush().every((x) => x.pass)).toBe(true);
+  });
+});
