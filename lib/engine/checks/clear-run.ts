@@ -42,7 +42,8 @@ export function clearRun(ctx: CheckContext, strip: Strip, o: RunOptions): RunRes
     if (s.prism.zMax <= o.zLo || s.prism.zMin >= o.zHi) continue;
     if (o.blocks && !o.blocks(s)) continue;
     const d = firstHitConvex(strip, s.prism.polygon);
-    if (d < best) {
+    // Ties go to the smaller id so the answer does not depend on the index's internal order.
+    if (d < best - 1e-9 || (d <= best + 1e-9 && blocker?.source !== "wall" && blocker !== undefined && s.id < blocker.id)) {
       best = d;
       blocker = { source: s.source, id: s.id, label: s.label };
     }

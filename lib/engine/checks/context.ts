@@ -31,6 +31,8 @@ export interface EvaluateOptions {
   preset?: Partial<RuleNumbers>;
   /** Label used in messages for numbers a preset set. */
   presetLabel?: string;
+  /** Grid cell edge, mm (1000 by default). A huge cell makes every query scan everything: the all-pairs baseline in benchmarks. */
+  cellMm?: number;
 }
 
 /** What every rule reads: the derived plan, the numbers in force, spatial indexes and a length formatter. */
@@ -62,13 +64,27 @@ const NOT_SOLID = new Set(["parking-bay", "outlet"]);
 export const solidKey = (s: { id: string; source: string }) => `${s.source}:${s.id}`;
 export const zoneItem = (z: WorldZone): ZoneItem => ({ zone: z, bounds: polygonBounds(z.prism.polygon) });
 
+/** Length formatter with a small cache: the same few lengths (36 in, 8 ft...) recur in hundreds of messages. */
+function memoLen(settings: PlanDocument["settings"]): (v: number) => string {
+  const cache = new Map<number, string>();
+  return (v) => {
+    const k = Math.round(v * 100);
+    let t = cache.get(k);
+    if (t === undefined) {
+      t = formatLengthFor(v, settings);
+      if (cache.size < 4096) cache.set(k, t);
+    }
+    return t;
+  };
+}
+
 /** Builds the context: resolves numbers and indexes every body and zone on a uniform grid. */
 export function buildContext(plan: PlanDocument, derived: Derived, opts: EvaluateOptions = {}): CheckContext {
   const numbers = resolveNumbers(plan, opts.preset);
   const presetSet = presetKeys(opts.preset);
   const presetLabel = opts.presetLabel ?? "class preset";
-  const solids = new GridIndex<SolidItem>(600);
-  const zoneIndex = new GridIndex<ZoneItem>(600);
+  const solids = new GridIndex<SolidItem>(opts.cellMm ?? 1000);
+  const zoneIndex = new GridIndex<ZoneItem>(opts.cellMm ?? 1000);
   const fixtureById = new Map<string, PlacedFixture>();
   for (const f of derived.fixtures) {
     fixtureById.set(f.id, f);
@@ -93,7 +109,7 @@ export function buildContext(plan: PlanDocument, derived: Derived, opts: Evaluat
     zoneIndex,
     fixtureById,
     roomPolygon: derived.room.corners,
-    len: (v) => formatLengthFor(v, settings),
+    len: memoLen(settings),
     presetNote: (...keys) => (keys.some((k) => presetSet.has(k)) ? ` (${presetLabel})` : ""),
   };
 }

@@ -11,16 +11,18 @@ import type { Finding, Rule } from "./types";
 /** Severity order for sorting: conflicts first. */
 const ORDER = { conflict: 0, caution: 1, advice: 2 } as const;
 
-/** Conflicts first, then cautions, then advice; failing before passing; then by rule order. */
+const RULE_INDEX = new Map(RULES.map((r, i) => [r.id, i]));
+const cmp = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
+/** Failing before passing; conflicts, then cautions, then advice; then rule order, subject and message (a stable order). */
 export function sortFindings(list: Finding[]): Finding[] {
-  const ruleIndex = new Map(RULES.map((r, i) => [r.id, i]));
   return [...list].sort(
     (a, b) =>
       Number(a.pass) - Number(b.pass) ||
       ORDER[a.severity] - ORDER[b.severity] ||
-      (ruleIndex.get(a.ruleId) ?? 99) - (ruleIndex.get(b.ruleId) ?? 99) ||
-      (a.subjectId ?? "").localeCompare(b.subjectId ?? "") ||
-      a.message.localeCompare(b.message),
+      (RULE_INDEX.get(a.ruleId) ?? 99) - (RULE_INDEX.get(b.ruleId) ?? 99) ||
+      cmp(a.subjectId ?? "", b.subjectId ?? "") ||
+      cmp(a.message, b.message),
   );
 }
 
@@ -102,13 +104,16 @@ export function createChecker(plan: PlanDocument, derived: Derived, opts: Evalua
       }
       for (const fd of current) if (fd.fixtureIds.some((x) => changed.has(x)) && fd.subjectId) for (const s of fd.subjectId.split("|")) subjects.add(s);
       const next: Finding[] = [];
+      const incremental = new Set(RULES.filter((r) => r.scope === "fixture" && r.evaluateFor).map((r) => r.id));
+      // Keep earlier findings of fixture rules whose subjects were not re-checked.
+      for (const fd of current) {
+        if (!incremental.has(fd.ruleId)) continue;
+        const sid = fd.subjectId ?? "";
+        const hit = sid.includes("|") ? sid.split("|").some((s) => subjects.has(s)) : subjects.has(sid);
+        if (!hit) next.push(fd);
+      }
       for (const rule of RULES) {
-        if (rule.scope === "fixture" && rule.evaluateFor) {
-          for (const fd of current) {
-            if (fd.ruleId !== rule.id) continue;
-            const keep = !(fd.subjectId ?? "").split("|").some((s) => subjects.has(s));
-            if (keep) next.push(fd);
-          }
+        if (incremental.has(rule.id)) {
           next.push(...runRule(rule, nextPlan, ctx, subjects));
         } else {
           next.push(...runRule(rule, nextPlan, ctx));

@@ -8,9 +8,10 @@ interface Entry<T> {
   cells: number[];
 }
 
-/** Cells far outside any room stay distinct: 2^20 cells a side before keys wrap. */
-const SPAN = 1 << 20;
-const HALF = SPAN >> 1;
+/** Cell coordinates are clamped to +/-2^13 so a cell key stays a small integer (no heap numbers, no garbage). */
+const HALF = 1 << 13;
+const SPAN = HALF * 2;
+const clampCell = (i: number) => (i < -HALF ? -HALF : i >= HALF ? HALF - 1 : i);
 
 /**
  * A uniform grid over floor bounds (mm). Each item sits in every cell its bounds touch; a query
@@ -31,7 +32,7 @@ export class GridIndex<T> {
 
   private cellRange(b: Bounds2): [number, number, number, number] {
     const c = this.cellMm;
-    return [Math.floor(b.minX / c), Math.floor(b.minY / c), Math.floor(b.maxX / c), Math.floor(b.maxY / c)];
+    return [clampCell(Math.floor(b.minX / c)), clampCell(Math.floor(b.minY / c)), clampCell(Math.floor(b.maxX / c)), clampCell(Math.floor(b.maxY / c))];
   }
 
   private static cellKey(ix: number, iy: number): number {
