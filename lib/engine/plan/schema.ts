@@ -133,11 +133,11 @@ export type FixtureDoc = z.infer<typeof fixtureSchema>;
 export const PLAN_SCHEMA_VERSION = 1 as const;
 
 export const planDocumentSchema = z.object({
-  schemaVersion: z.literal(PLAN_SCHEMA_VERSION),
-  settings: settingsSchema.default(() => settingsSchema.parse({})),
-  room: roomSchema,
-  materials: z.array(materialSchema).max(100).default([]),
-  fixtures: z.array(fixtureSchema).max(2000).default([]),
+  schemaVersion: z.literal(PLAN_SCHEMA_VERSION).meta({ description: "Format version; older files are upgraded on import." }),
+  settings: settingsSchema.default(() => settingsSchema.parse({})).meta({ description: "Units and shop settings." }),
+  room: roomSchema.meta({ description: "The measured room: walls counter-clockwise, corner i where wall i starts. Lengths in mm." }),
+  materials: z.array(materialSchema).max(100).default([]).meta({ description: "Sheet goods and boards the fixtures use." }),
+  fixtures: z.array(fixtureSchema).max(2000).default([]).meta({ description: "Fixtures: kind, placement and the kind's parameters (mm)." }),
 });
 export type PlanDocument = z.infer<typeof planDocumentSchema>;
 /** What a client may send before defaults are filled in. */

@@ -75,3 +75,11 @@ describe("docs/plan-format.md", () => {
     for (const f of fields) expect(md).toContain("`" + f);
   });
 });
+
+describe("planJsonSchema descriptions", () => {
+  it("carries the top-level field descriptions", () => {
+    const props = (planJsonSchema() as { properties: Record<string, { description?: string }> }).properties;
+    for (const k of ["schemaVersion", "settings", "room", "materials", "fixtures"]) expect(props[k].description).toBeTruthy();
+    expect(props.room.description).toMatch(/mm/);
+  });
+});
