@@ -14,11 +14,9 @@ export default async function PlanPage({ params }: { params: Promise<{ id: strin
   const user = await currentUser(em);
   if (!user) redirect(`/signin?callbackUrl=/plans/${id}`);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
-  try {
-    const plan = await getPlan(em, user, id);
-    return <PlanViewer name={plan.name} document={plan.document} />;
-  } catch (e) {
+  const plan = await getPlan(em, user, id).catch((e: unknown) => {
     if (e instanceof AppError && (e.status === 404 || e.status === 403)) notFound();
     throw e;
-  }
+  });
+  return <PlanViewer name={plan.name} document={plan.document} />;
 }
