@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { Part } from "@/lib/engine/fixtures/types";
 import type { NestOptions, NestProgress, NestResult } from "@/lib/engine/nesting/types";
 import type { Material } from "@/lib/engine/plan/schema";
@@ -33,7 +33,9 @@ export function useNesting(parts: readonly Part[], materials: readonly Material[
   const worker = useRef<Worker | null>(null);
   const seq = useRef(0);
   // One key for the inputs, so a new array with the same content does not restart the search.
-  const key = JSON.stringify([parts, materials, options]);
+  const key = JSON.stringify({ parts, materials, options });
+  const input = useMemo(() => JSON.parse(key) as Omit<NestRequest, "id">, [key]);
+  const busy = useRef(false);
 
   const stopWorker = useCallback(() => {
     worker.current?.terminate();
@@ -42,11 +44,12 @@ export function useNesting(parts: readonly Part[], materials: readonly Material[
 
   useEffect(() => {
     const id = ++seq.current;
-    const req: NestRequest = JSON.parse(JSON.stringify({ id, parts, materials, options }));
+    const req: NestRequest = { id, ...input };
     const onReply = (r: NestReply) => {
       if (r.id !== seq.current) return;
       if (r.type === "progress") setProgress(r.progress);
       else {
+        busy.current = false;
         setRunning(false);
         setProgress(null);
         if (r.type === "done") setResult(r.result);
@@ -58,9 +61,13 @@ export function useNesting(parts: readonly Part[], materials: readonly Material[
       setCancelled(false);
       setError(null);
       if (typeof Worker === "undefined") {
+        busy.current = true;
         runNestRequest(req, onReply);
         return;
       }
+      // A worker busy with stale inputs cannot be interrupted: replace it.
+      if (busy.current) stopWorker();
+      busy.current = true;
       if (!worker.current) {
         worker.current = new Worker(new URL("./nest-worker.ts", import.meta.url), { type: "module" });
       }
@@ -69,14 +76,13 @@ export function useNesting(parts: readonly Part[], materials: readonly Material[
       worker.current.postMessage(req);
     }, debounceMs);
     return () => clearTimeout(timer);
-    // `key` stands for parts, materials and options.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [key, runCount, debounceMs]);
+  }, [input, runCount, debounceMs, stopWorker]);
 
   useEffect(() => stopWorker, [stopWorker]);
 
   const cancel = useCallback(() => {
     seq.current++;
+    busy.current = false;
     stopWorker();
     setRunning(false);
     setProgress(null);

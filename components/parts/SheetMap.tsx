@@ -1,0 +1,117 @@
+import type { SheetLayout } from "@/lib/engine/nesting/types";
+import type { Formatters } from "./format";
+
+/**
+ * One sheet drawn to scale (mm in the SVG's own units): pieces with name and size, grain arrows
+ * along the sheet's length, hatched offcuts (darker where reusable), trim margin, and the cut
+ * order numbered where each cut starts.
+ */
+export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; kerfMm: number; fmt: Formatters; title: string }) {
+  const L = sheet.lengthMm;
+  const W = sheet.widthMm;
+  const hatch = `hatch-${sheet.stockId}-${sheet.index}`;
+  const hatchKeep = `${hatch}-keep`;
+  const font = Math.max(22, Math.min(L, W) / 30);
+  return (
+    <figure className="break-inside-avoid" data-testid="sheet-map">
+      <figcaption className="mb-1 text-sm font-semibold text-walnut-900">
+        {title} · {fmt.size(L, W)} · {sheet.placements.length} pieces · yield {sheet.yieldPct.toFixed(0)}%
+        {sheet.source === "offcut" && " · your offcut"}
+      </figcaption>
+      <svg viewBox={`-4 -4 ${L + 8} ${W + 8}`} className="h-auto w-full max-w-4xl bg-white" role="img" aria-label={`${title}: ${sheet.placements.length} pieces, ${sheet.cuts.length} cuts`}>
+        <defs>
+          <pattern id={hatch} width={40} height={40} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+            <line x1={0} y1={0} x2={0} y2={40} stroke="#b89c80" strokeWidth={4} />
+          </pattern>
+          <pattern id={hatchKeep} width={30} height={30} patternUnits="userSpaceOnUse" patternTransform="rotate(-45)">
+            <line x1={0} y1={0} x2={0} y2={30} stroke="#2f7d4f" strokeWidth={5} />
+          </pattern>
+          <marker id={`${hatch}-arrow`} viewBox="0 0 10 10" refX={9} refY={5} markerWidth={6} markerHeight={6} orient="auto">
+            <path d="M0,0 L10,5 L0,10 z" fill="#7a5a3e" />
+          </marker>
+        </defs>
+        <rect x={0} y={0} width={L} height={W} fill="#ece3d0" stroke="#2a1c12" strokeWidth={4} />
+        {sheet.trimMm > 0 && (
+          <rect x={sheet.trimMm} y={sheet.trimMm} width={L - 2 * sheet.trimMm} height={W - 2 * sheet.trimMm} fill="none" stroke="#7a5a3e" strokeWidth={2} strokeDasharray="12 8" />
+        )}
+        {sheet.offcuts.map((o, i) => (
+          <g key={`o${i}`}>
+            <rect x={o.xMm} y={o.yMm} width={o.lenMm} height={o.widMm} fill={`url(#${o.reusable ? hatchKeep : hatch})`} stroke={o.reusable ? "#2f7d4f" : "none"} strokeWidth={3} />
+            {o.reusable && o.lenMm > 6 * font && o.widMm > 2 * font && (
+              <text x={o.xMm + o.lenMm / 2} y={o.yMm + o.widMm / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" fill="#1f5636" stroke="white" strokeWidth={4} paintOrder="stroke">
+                offcut {fmt.size(o.lenMm, o.widMm)}
+              </text>
+            )}
+          </g>
+        ))}
+        {sheet.placements.map((p) => {
+          const big = p.lenMm > 5 * font && p.widMm > 2.4 * font;
+          return (
+            <g key={p.pieceKey}>
+              <rect x={p.xMm} y={p.yMm} width={p.lenMm} height={p.widMm} fill="#fdf0cf" stroke="#4b3423" strokeWidth={3} />
+              <title>{`${p.name}: ${fmt.size(p.rotated ? p.widMm : p.lenMm, p.rotated ? p.lenMm : p.widMm)}`}</title>
+              {big && (
+                <text x={p.xMm + p.lenMm / 2} y={p.yMm + p.widMm / 2 - font * 0.6} fontSize={font} textAnchor="middle" fill="#2a1c12">
+                  {p.name.length > 28 ? `${p.name.slice(0, 27)}…` : p.name}
+                </text>
+              )}
+              {big && (
+                <text x={p.xMm + p.lenMm / 2} y={p.yMm + p.widMm / 2 + font * 0.6} fontSize={font * 0.85} textAnchor="middle" fill="#4b3423">
+                  {fmt.size(p.rotated ? p.widMm : p.lenMm, p.rotated ? p.lenMm : p.widMm)}
+                </text>
+              )}
+              {p.grain !== "none" && p.lenMm > 4 * font && p.widMm > 1.5 * font && (
+                <line
+                  x1={p.xMm + font}
+                  x2={p.xMm + Math.min(p.lenMm - font, 5 * font)}
+                  y1={p.yMm + p.widMm - font * 0.7}
+                  y2={p.yMm + p.widMm - font * 0.7}
+                  stroke="#7a5a3e"
+                  strokeWidth={3}
+                  markerEnd={`url(#${hatch}-arrow)`}
+                >
+                  <title>Grain</title>
+                </line>
+              )}
+            </g>
+          );
+        })}
+        {sheet.cuts.map((c) => {
+          const rip = c.kind === "rip";
+          const x1 = rip ? c.x1Mm : c.x1Mm + kerfMm / 2;
+          const y1 = rip ? c.y1Mm + kerfMm / 2 : c.y1Mm;
+          const x2 = rip ? c.x2Mm : c.x2Mm + kerfMm / 2;
+          const y2 = rip ? c.y2Mm + kerfMm / 2 : c.y2Mm;
+          const r = font * 0.75;
+          return (
+            <g key={`c${c.seq}`}>
+              <line x1={x1} y1={y1} x2={x2} y2={y2} stroke="#b5432c" strokeWidth={2} strokeDasharray="16 6" />
+              <circle cx={x1 + (rip ? r : 0)} cy={y1 + (rip ? 0 : r)} r={r} fill="#b5432c" />
+              <text x={x1 + (rip ? r : 0)} y={y1 + (rip ? 0 : r)} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="central" fill="white">
+                {c.seq}
+              </text>
+            </g>
+          );
+        })}
+      </svg>
+    </figure>
+  );
+}
+
+/** The cut order in words, for the saw: "1. Rip the sheet 610 mm from the near edge". */
+export function CutList({ sheet, fmt }: { sheet: SheetLayout; fmt: Formatters }) {
+  return (
+    <ol className="mt-2 columns-1 gap-6 text-xs text-walnut-700 sm:columns-2 lg:columns-3">
+      {sheet.cuts.map((c) => {
+        const rip = c.kind === "rip";
+        const width = rip ? c.y1Mm - sheet.trimMm : c.x1Mm - sheet.trimMm;
+        return (
+          <li key={c.seq} className="break-inside-avoid">
+            {c.seq}. {rip ? "Rip" : "Crosscut"} {c.level === 1 ? "the sheet" : c.level === 2 ? (rip ? "the piece" : "the strip") : "the piece"} at {fmt.len(rip ? c.y1Mm : c.x1Mm)} from the sheet&apos;s {rip ? "near edge" : "end"}
+            {c.level === 1 && width > 0 ? ` (${fmt.len(width)} past the trim)` : ""}
+          </li>
+        );
+      })}
+    </ol>
+  );
+}
