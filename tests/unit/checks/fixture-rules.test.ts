@@ -176,3 +176,45 @@ describe("cautions (advice, deferring to local codes)", () => {
   });
   it("feet helper: 3 ft = 914.4 mm (NIST SP 811)", () => expect(3 * FT).toBeCloseTo(914.4, 9));
 });
+
+// Table saw on a mobile base: infeed and outfeed the longest stock (8 ft, plan default); outfeed support about
+// 4 ft past the blade (occupational safety guidance, secondary copy; TRADE.md).
+describe("table saw infeed, outfeed and outfeed support", () => {
+  const L = 8 * FT;
+  const run = (wallGap: number, outfeedTable = 0) => {
+    // Saw 800 x 700 free in the room, blade 100 mm in from the front; infeed runs toward +y, outfeed toward -y.
+    const y0 = 3000;
+    const saw = fixture("ts", {
+      kind: "mobile-base",
+      label: "Table saw",
+      x: 2000,
+      y: y0,
+      w: 800,
+      d: 700,
+      h: 900,
+      work: 900,
+      zones: [
+        { purpose: "infeed", x: 350, y: 600, z: 900, w: 100, d: L, h: 150 },
+        { purpose: "outfeed", x: 350, y: 600 - L, z: 900, w: 100, d: L, h: 150 },
+        { purpose: "outfeed-support", x: 350, y: 600 - 4 * FT, z: 899, w: 100, d: 4 * FT - 600, h: 1 },
+      ],
+    });
+    const D = y0 + 600 + L + wallGap;
+    const plan = makePlan(6000, D);
+    const fx = [saw];
+    if (outfeedTable) fx.push(fixture("ot", { kind: "workbench", x: 2000, y: y0 - outfeedTable, w: 800, d: outfeedTable, h: 900, work: 900 }));
+    return evaluatePlan(plan, derive(plan, rectRoom(6000, D), fx)).filter((f) => f.ruleId === "saw-infeed-outfeed");
+  };
+  it("infeed passes with the wall exactly 8 ft from the blade, fails 1 mm closer", () => {
+    expect(run(0).find((f) => f.message.includes("infeed"))!.pass).toBe(true);
+    const f = run(-1).find((x) => x.message.includes("infeed"))!;
+    expect(f.pass).toBe(false);
+    expect(f.measured).toBeCloseTo(L - 1, 1);
+  });
+  it("outfeed support: a table reaching 4 ft past the blade passes, a shorter one fails", () => {
+    expect(run(10, 4 * FT - 600).find((f) => f.message.includes("outfeed supported"))!.pass).toBe(true);
+    const f = run(10, 4 * FT - 610).find((x) => x.message.includes("outfeed supported"))!;
+    expect(f.pass).toBe(false);
+    expect(f.shortfall).toBeCloseTo(10, 1);
+  });
+});

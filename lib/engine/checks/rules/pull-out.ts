@@ -7,7 +7,13 @@ import { PURPOSE } from "../kinds";
 import type { Finding, Rule } from "../types";
 
 const ID = "pull-out";
-const NAMES: Record<string, string> = { [PURPOSE.drawerPull]: "drawers", [PURPOSE.doorSwing]: "doors" };
+const NAMES: Record<string, string> = {
+  [PURPOSE.drawerPull]: "drawers",
+  [PURPOSE.doorSwing]: "doors",
+  "work-aisle": "standing room",
+  "loading-aisle": "room to load and pull stock",
+  "rear-clearance": "room behind the tool",
+};
 
 function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
@@ -27,8 +33,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
           ok,
           f.id,
           ok
-            ? `${f.label}: ${what} open fully (${ctx.len(need)}).`
-            : `${f.label}: ${what} open only ${ctx.len(run.clearMm)} of ${ctx.len(need)}${run.blocker ? ` before hitting ${run.blocker.label}` : ""}.`,
+            ? `${f.label}: ${what} clear for ${ctx.len(need)}.`
+            : `${f.label}: ${what} clear for only ${ctx.len(run.clearMm)} of ${ctx.len(need)}${run.blocker ? ` before ${run.blocker.label}` : ""}.`,
           {
             fixtureIds: run.blocker?.source === "fixture" ? [f.id, run.blocker.id] : [f.id],
             zoneIds: [z.id],
@@ -48,10 +54,13 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
 /** Drawers and doors of a fixture open fully without meeting anything. */
 export const pullOutRule: Rule<CheckContext> = {
   id: ID,
-  title: "Drawers and doors open fully",
+  title: "Drawers, doors and working room clear",
   protects: "A drawer that stops against a neighbour or a post cannot be emptied, and people learn to yank it, which wrecks slides and pinches fingers.",
-  formula: "clear length in front of each drawer or door (at its height) >= its pull-out or swing depth",
-  numbers: [{ label: "Pull-out depth", value: "the drawer's slide length, or the door's width, as the fixture defines it" }],
+  formula: "clear length in front of each drawer, door, bench or rack (at its height) >= the depth its zone asks",
+  numbers: [
+    { label: "Pull-out depth", value: "the drawer's slide length, or the door's width, as the fixture defines it" },
+    { label: "Standing room at a bench, loading room at a rack", value: "as the fixture defines it" },
+  ],
   sources: [{ citation: "Common cabinetmaking practice", status: "practice" }],
   severity: "conflict",
   cautions: [],

@@ -1,3 +1,4 @@
+import { shelfRunParamsSchema } from "../../fixtures/shelf-run/params";
 import { shelfSag } from "../../sag/shelf-sag";
 import { stiffnessOf } from "../../sag/moe";
 import type { CheckContext } from "../context";
@@ -16,13 +17,27 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const lbPerFt = (n.shelfLoadKgPerM * LB_PER_KG) / FT_PER_M;
   // One finding per distinct shelf size in a fixture: identical shelves sag alike.
   const seen = new Set<string>();
+  const docs = new Map(ctx.plan.fixtures.map((d) => [d.id, d]));
   for (const p of ctx.parts) {
     if (!/shelf/i.test(p.name) || (ids && !ids.has(p.fixtureId))) continue;
     const key = `${p.fixtureId}|${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
     if (seen.has(key)) continue;
     seen.add(key);
-    const stiff = stiffnessKeyFor(p.materialId, ctx.plan.materials);
-    const r = shelfSag({ spanMm: p.lengthMm, depthMm: p.widthMm, thicknessMm: p.thicknessMm, stiffnessKey: stiff, uniformLbPerFt: lbPerFt });
+    // A shelf run says its own load and stiffness; other shelves carry the rule's book load.
+    const doc = docs.get(p.fixtureId);
+    const run = doc?.kind === "shelf-run" ? shelfRunParamsSchema.safeParse(doc.params) : undefined;
+    const rp = run?.success ? run.data : undefined;
+    const stiff = rp?.stiffnessKey ?? stiffnessKeyFor(p.materialId, ctx.plan.materials);
+    const load = rp ? rp.loadLbPerFt : lbPerFt;
+    const r = shelfSag({
+      spanMm: p.lengthMm,
+      depthMm: p.widthMm,
+      thicknessMm: p.thicknessMm,
+      stiffnessKey: stiff,
+      uniformLbPerFt: load,
+      centreLoadLb: rp?.centreLoadLb,
+      longTerm: rp?.longTerm,
+    });
     const limitMm = (n.sagLimitMmPerM * p.lengthMm) / 1000;
     const ok = r.deflectionMm <= limitMm + 1e-9;
     const f = ctx.fixtureById.get(p.fixtureId);
@@ -35,8 +50,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
         ok,
         p.fixtureId,
         ok
-          ? `${who} sags ${r.deflectionIn.toFixed(3)} in under ${lbPerFt.toFixed(0)} lb/ft (${mat}); within ${limitIn(limitMm)} in${note}.`
-          : `${who} sags ${r.deflectionIn.toFixed(3)} in under ${lbPerFt.toFixed(0)} lb/ft (${mat}), over the ${limitIn(limitMm)} in guide${note}: shorten the span, add a stiffening edge, or use thicker stock.`,
+          ? `${who} sags ${r.deflectionIn.toFixed(3)} in under ${load.toFixed(0)} lb/ft${rp?.longTerm ? ", long term" : ""} (${mat}); within ${limitIn(limitMm)} in${note}.`
+          : `${who} sags ${r.deflectionIn.toFixed(3)} in under ${load.toFixed(0)} lb/ft${rp?.longTerm ? ", long term" : ""} (${mat}), over the ${limitIn(limitMm)} in guide${note}: shorten the span, add a stiffening edge, or use thicker stock.`,
         { fixtureIds: [p.fixtureId], measured: r.deflectionMm, required: limitMm, shortfall: r.deflectionMm - limitMm, unit: "mm" },
       ),
     );

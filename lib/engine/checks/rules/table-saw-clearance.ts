@@ -1,13 +1,20 @@
 import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
-import { centroid } from "../geom/polygon";
-import { stripThroughZone } from "../geom/strip";
+import type { PlacedFixture, WorldZone } from "../../fixtures/types";
+import { centroid, polygonBounds } from "../geom/polygon";
+import { centreLineCover, coveredFromStart, stripThroughZone } from "../geom/strip";
 import { PURPOSE, isTableSaw, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
 
 const ID = "saw-infeed-outfeed";
-const NAMES: Record<string, string> = { [PURPOSE.infeed]: "infeed", [PURPOSE.outfeed]: "outfeed", [PURPOSE.sideClearance]: "side clearance" };
+const NAMES: Record<string, string> = {
+  [PURPOSE.infeed]: "infeed",
+  [PURPOSE.outfeed]: "outfeed",
+  [PURPOSE.sideClearance]: "side room",
+  "side-left": "side room left of the blade",
+  "side-right": "side room right of the blade",
+};
 
 function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
@@ -16,6 +23,10 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     if (!isTableSaw(f) || (ids && !ids.has(f.id))) continue;
     const table = worldWorkSurface(f) ?? f.body.zMax;
     for (const z of f.zones) {
+      if (z.purpose === "outfeed-support") {
+        out.push(supportFinding(ctx, f, z, table));
+        continue;
+      }
       const name = NAMES[z.purpose];
       if (!name) continue;
       const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
@@ -46,6 +57,33 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     }
   }
   return out;
+}
+
+/** Outfeed support: something at table height (within the flush tolerance) under the zone, from the saw's back edge. */
+function supportFinding(ctx: CheckContext, f: PlacedFixture, z: WorldZone, table: number): Finding {
+  const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
+  const intervals: [number, number][] = [];
+  for (const s of ctx.solids.query(polygonBounds(z.prism.polygon))) {
+    const sf = s.fixture;
+    if (!sf || sf.id === f.id) continue;
+    const top = worldWorkSurface(sf);
+    if (top === undefined || Math.abs(top - table) > ctx.numbers.flushToleranceMm) continue;
+    const c = centreLineCover(strip, sf.body.polygon);
+    if (c) intervals.push(c);
+  }
+  const got = Math.min(strip.length, coveredFromStart(intervals, 25, 25));
+  const need = strip.length;
+  const ok = got >= need - 0.5;
+  return finding(
+    ID,
+    "caution",
+    ok,
+    f.id,
+    ok
+      ? `${f.label}: outfeed supported at table height for ${ctx.len(need)}.`
+      : `${f.label}: outfeed supported for ${ctx.len(got)} of ${ctx.len(need)} past the table; add an outfeed table or roller stand at table height.`,
+    { fixtureIds: [f.id], zoneIds: [z.id], measured: got, required: need, shortfall: need - got, unit: "mm" },
+  );
 }
 
 /** Infeed, outfeed and side clearance around a table saw, as its zones define them. */
