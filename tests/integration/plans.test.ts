@@ -128,3 +128,27 @@ describe.skipIf(!hasServer)("plans API against the real server and PostgreSQL", 
     expect(copy.body.plan.id).not.toBe(id);
   });
 });
+
+describe.skipIf(!hasServer)("plan files: export and import", () => {
+  it("exports a plan and imports it back as a new plan; refuses files that are not plans", async () => {
+    const { client } = await newMember("porter");
+    const id = (await client.post("/api/v1/plans", { name: "Export me", document: doc(6400) })).body.plan.id;
+    const exported = await client.get(`/api/v1/plans/${id}/export`);
+    expect(exported.status).toBe(200);
+    expect(exported.headers.get("content-disposition")).toContain("export-me.benchwright.json");
+    expect(exported.body.format).toBe("benchwright-plan");
+    const imported = await client.post("/api/v1/plans/import", exported.body);
+    expect(imported.status).toBe(201);
+    expect(imported.body.plan.id).not.toBe(id);
+    expect(imported.body.plan.document.room.walls[0].lengthMm).toBe(6400);
+
+    const wrong = await client.post("/api/v1/plans/import", { format: "something-else", name: "x", document: {} });
+    expect(wrong.status).toBe(422);
+    expect(wrong.body.error.fields.format).toMatch(/not a Benchwright plan/);
+    const newer = await client.post("/api/v1/plans/import", { format: "benchwright-plan", name: "x", document: { schemaVersion: 99 } });
+    expect(newer.status).toBe(422);
+    expect(newer.body.error.fields["document.schemaVersion"]).toBeTruthy();
+    const stranger = (await newMember("nosy")).client;
+    expect((await stranger.get(`/api/v1/plans/${id}/export`)).status).toBe(404);
+  });
+});
