@@ -18,6 +18,13 @@ export const liveEngine: EnginePort = {
     if (!k || !p?.success) return { widthMm: 600, depthMm: 600, heightMm: 900 };
     return k.footprint(p.data, { settings: doc.settings, materials: doc.materials });
   },
+  fixtureParts(doc, fixtureId) {
+    const f = doc.fixtures.find((x) => x.id === fixtureId);
+    const k = f && kindOf(f.kind);
+    const p = k?.paramsSchema.safeParse(f?.params);
+    if (!f || !k || !p?.success) return [];
+    return k.parts(f.id, p.data, { settings: doc.settings, materials: doc.materials });
+  },
   formatLength: (mm, s) => formatLength(mm, { units: s.units, precision: s.precision }),
   parseLength(text, s, opts) {
     const r = parseLength(text, { units: s.units, allowZero: opts?.allowZero, allowNegative: opts?.allowNegative });

@@ -1,7 +1,7 @@
 import type { z } from "zod";
 import type { Finding } from "@/lib/engine/checks/types";
 import type { Derived } from "@/lib/engine/derive-types";
-import type { Footprint } from "@/lib/engine/fixtures/types";
+import type { Footprint, Part } from "@/lib/engine/fixtures/types";
 import type { PlanDocument, PlanSettings } from "@/lib/engine/plan/schema";
 
 /** Result of reading a typed length: millimetres, or a message saying what is wrong. */
@@ -31,6 +31,8 @@ export interface EnginePort {
   paramsSchema(kind: string): z.ZodType | undefined;
   defaultParams(kind: string): Record<string, unknown>;
   footprint(kind: string, params: Record<string, unknown>, doc: PlanDocument): Footprint;
+  /** One fixture's parts list (for the read-only sizes in the properties panel). */
+  fixtureParts(doc: PlanDocument, fixtureId: string): Part[];
   formatLength(mm: number, settings: PlanSettings): string;
   parseLength(text: string, settings: PlanSettings, opts?: ParseOptions): LengthRead;
 }

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
-import { PlanViewer } from "@/components/plans/PlanViewer";
+import { EditorShell } from "@/components/editor/EditorShell";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
 import { currentUser } from "@/lib/server/session";
@@ -8,6 +8,7 @@ import { getPlan } from "@/lib/server/services/plans";
 
 export const metadata: Metadata = { title: "Plan" };
 
+/** The room editor for one plan; signed-in users with access only. */
 export default async function PlanPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const em = await requestEm();
@@ -18,5 +19,5 @@ export default async function PlanPage({ params }: { params: Promise<{ id: strin
     if (e instanceof AppError && (e.status === 404 || e.status === 403)) notFound();
     throw e;
   });
-  return <PlanViewer name={plan.name} document={plan.document} />;
+  return <EditorShell plan={{ id: plan.id, name: plan.name, version: plan.version, document: plan.document, role: plan.role }} />;
 }

@@ -127,6 +127,13 @@ export class Autosave {
     return plan;
   }
 
+  /** Takes a plan the server now holds (a restored revision) as the saved state. */
+  adopt(plan: PlanRecord): void {
+    this.savedDoc = plan.document;
+    this.store.setState({ version: plan.version });
+    this.send({ type: "resolved", at: this.now() });
+  }
+
   /** Conflict, second choice: save my document as a new plan; the caller opens it. */
   async keepMineAsCopy(name: string): Promise<PlanRecord> {
     const plan = await this.o.api.create(name, this.o.getDoc());
