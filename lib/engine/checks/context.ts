@@ -45,8 +45,10 @@ export interface CheckContext extends Derived {
   zoneIndex: GridIndex<ZoneItem>;
   fixtureById: Map<string, PlacedFixture>;
   roomPolygon: Vec2[];
-  /** Length in the plan's units, e.g. `36 in`. */
+  /** Length in the plan's units, e.g. `36"`. */
   len(mmValue: number): string;
+  /** Small lengths (tolerances, sag) to 1/32 in whatever the plan's precision. */
+  lenFine(mmValue: number): string;
   /** " (class preset)" when any of these numbers came from the preset, else "". */
   presetNote(...keys: (keyof RuleNumbers)[]): string;
 }
@@ -110,6 +112,7 @@ export function buildContext(plan: PlanDocument, derived: Derived, opts: Evaluat
     fixtureById,
     roomPolygon: derived.room.corners,
     len: memoLen(settings),
+    lenFine: memoLen({ ...settings, precision: 32 }),
     presetNote: (...keys) => (keys.some((k) => presetSet.has(k)) ? ` (${presetLabel})` : ""),
   };
 }

@@ -68,6 +68,14 @@ export function createChecker(plan: PlanDocument, derived: Derived, opts: Evalua
     lastRechecked: () => rechecked,
     update(nextPlan, nextDerived, changedIds) {
       const changed = new Set(changedIds);
+      // Also catch fixtures the caller did not name (a tool shelf re-levelled after its counter moved, adds, deletes).
+      const seen = new Set<string>();
+      for (const f of nextDerived.fixtures) {
+        seen.add(f.id);
+        const before = ctx.fixtureById.get(f.id);
+        if (!before || (before !== f && !sameShape(before, f))) changed.add(f.id);
+      }
+      for (const id of ctx.fixtureById.keys()) if (!seen.has(id)) changed.add(id);
       // Areas touched: each changed fixture's old and new extent (body and zones).
       const touched: Bounds2[] = [];
       for (const id of changed) {
@@ -124,6 +132,20 @@ export function createChecker(plan: PlanDocument, derived: Derived, opts: Evalua
       return sortFindings(current);
     },
   };
+}
+
+const samePrism = (a: PlacedFixture["body"], b: PlacedFixture["body"]) =>
+  a.zMin === b.zMin && a.zMax === b.zMax && a.polygon.length === b.polygon.length && a.polygon.every((p, i) => p.x === b.polygon[i].x && p.y === b.polygon[i].y);
+
+/** Same body, work surface and zones (a re-derived but unmoved fixture). */
+function sameShape(a: PlacedFixture, b: PlacedFixture): boolean {
+  return (
+    a.workSurfaceMm === b.workSurfaceMm &&
+    a.label === b.label &&
+    samePrism(a.body, b.body) &&
+    a.zones.length === b.zones.length &&
+    a.zones.every((z, i) => z.id === b.zones[i].id && samePrism(z.prism, b.zones[i].prism))
+  );
 }
 
 function unionAll(f: PlacedFixture): Bounds2 {

@@ -25,8 +25,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
       const pass = Math.abs(diff) <= tol;
       const where = diff > 0 ? "below" : "above";
       const msg = pass
-        ? `${f.label} table is flush with ${n.label} (within ${ctx.len(tol)}${ctx.presetNote("flushToleranceMm")}).`
-        : `${f.label} table sits ${ctx.len(Math.abs(diff))} ${where} ${n.label}; flush means within ${ctx.len(tol)}${ctx.presetNote("flushToleranceMm")}. Adjust the shelf height.`;
+        ? `${f.label} table is flush with ${n.label} (within ${ctx.lenFine(tol)}${ctx.presetNote("flushToleranceMm")}).`
+        : `${f.label} table sits ${ctx.lenFine(Math.abs(diff))} ${where} ${n.label}; flush means within ${ctx.lenFine(tol)}${ctx.presetNote("flushToleranceMm")}. Adjust the shelf height.`;
       out.push(
         finding(ID, "conflict", pass, f.id, msg, {
           fixtureIds: [f.id, n.id],
