@@ -9,7 +9,7 @@ export function BoardLayouts({ plan, fmt }: { plan: BoardPlan; fmt: Formatters }
     <div className="flex flex-col gap-6">
       {plan.groups.map((g) => {
         const longest = Math.max(...g.boards.map((b) => b.lengthMm));
-        const width = nominalWidthName(g.stockWidthMm) ?? fmt.len(g.stockWidthMm);
+        const width = nominalWidthName(g.stockWidthMm, g.thicknessMm) ?? fmt.len(g.stockWidthMm);
         return (
           <section key={`${g.materialId}-${g.thicknessMm}-${g.stockWidthMm}`} className="break-inside-avoid" data-testid="board-group">
             <h3 className="font-semibold text-walnut-900">

@@ -31,8 +31,8 @@ export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; ke
           </marker>
         </defs>
         <rect x={0} y={0} width={L} height={W} fill="#ece3d0" stroke="#2a1c12" strokeWidth={4} />
-        {sheet.trimMm > 0 && (
-          <rect x={sheet.trimMm} y={sheet.trimMm} width={L - 2 * sheet.trimMm} height={W - 2 * sheet.trimMm} fill="none" stroke="#7a5a3e" strokeWidth={2} strokeDasharray="12 8" />
+        {(sheet.usable.lenMm < L || sheet.usable.widMm < W) && (
+          <rect x={sheet.usable.xMm} y={sheet.usable.yMm} width={sheet.usable.lenMm} height={sheet.usable.widMm} fill="none" stroke="#7a5a3e" strokeWidth={2} strokeDasharray="12 8" />
         )}
         {sheet.offcuts.map((o, i) => (
           <g key={`o${i}`}>
@@ -104,7 +104,7 @@ export function CutList({ sheet, fmt }: { sheet: SheetLayout; fmt: Formatters })
     <ol className="mt-2 columns-1 gap-6 text-xs text-walnut-700 sm:columns-2 lg:columns-3">
       {sheet.cuts.map((c) => {
         const rip = c.kind === "rip";
-        const width = rip ? c.y1Mm - sheet.trimMm : c.x1Mm - sheet.trimMm;
+        const width = rip ? c.y1Mm - sheet.usable.yMm : c.x1Mm - sheet.usable.xMm;
         return (
           <li key={c.seq} className="break-inside-avoid">
             {c.seq}. {rip ? "Rip" : "Crosscut"} {c.level === 1 ? "the sheet" : c.level === 2 ? (rip ? "the piece" : "the strip") : "the piece"} at {fmt.len(rip ? c.y1Mm : c.x1Mm)} from the sheet&apos;s {rip ? "near edge" : "end"}

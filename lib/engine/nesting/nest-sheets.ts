@@ -45,8 +45,33 @@ export function nestSheets(parts: readonly Part[], materials: readonly Material[
   return { materials: out, unplaced: out.flatMap((m) => m.unplaced), elapsedMs: performance.now() - t0, stopped };
 }
 
+/**
+ * Edge trim per axis for new sheets: the nominal trim, reduced on an axis only as far as a piece
+ * needs (an 8 ft part is cut from a full-length sheet with its ends left as they came).
+ */
+function trimsFor(g: SheetGroup, trim: number): { x: number; y: number } {
+  let x = trim;
+  let y = trim;
+  const L = g.sheetLengthMm;
+  const W = g.sheetWidthMm;
+  for (const p of g.pieces) {
+    const ors: [number, number][] = p.grain === "length" ? [[p.lengthMm, p.widthMm]] : p.grain === "width" ? [[p.widthMm, p.lengthMm]] : [[p.lengthMm, p.widthMm], [p.widthMm, p.lengthMm]];
+    let best: { x: number; y: number } | null = null;
+    for (const [a, b] of ors) {
+      if (a > L + EPS || b > W + EPS) continue;
+      const o = { x: Math.min(trim, Math.max(0, (L - a) / 2)), y: Math.min(trim, Math.max(0, (W - b) / 2)) };
+      if (!best || o.x + o.y > best.x + best.y) best = o;
+    }
+    if (best) {
+      x = Math.min(x, best.x);
+      y = Math.min(y, best.y);
+    }
+  }
+  return { x, y };
+}
+
 function stocksFor(g: SheetGroup, opts: NestOptions): SheetStock[] {
-  const trim = opts.trimMm ?? DEFAULT_TRIM_MM;
+  const trims = trimsFor(g, opts.trimMm ?? DEFAULT_TRIM_MM);
   const offcuts: SheetStock[] = (opts.offcuts ?? [])
     .filter((o) => o.materialId === g.materialId && o.qty > 0)
     .map((o) => ({
@@ -56,10 +81,11 @@ function stocksFor(g: SheetGroup, opts: NestOptions): SheetStock[] {
       widthMm: Math.min(o.lengthMm, o.widthMm),
       qty: o.qty,
       source: "offcut" as const,
-      trimMm: 0,
+      trimLengthMm: 0,
+      trimWidthMm: 0,
     }))
     .sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm);
-  const sheet: SheetStock = { id: `${g.materialId}-sheet`, materialId: g.materialId, lengthMm: g.sheetLengthMm, widthMm: g.sheetWidthMm, qty: Infinity, source: "new", trimMm: trim };
+  const sheet: SheetStock = { id: `${g.materialId}-sheet`, materialId: g.materialId, lengthMm: g.sheetLengthMm, widthMm: g.sheetWidthMm, qty: Infinity, source: "new", trimLengthMm: trims.x, trimWidthMm: trims.y };
   return [...offcuts, sheet];
 }
 
@@ -72,7 +98,12 @@ function nestGroup(
   const kerf = opts.kerfMm;
   const stocks = stocksFor(g, opts);
   const newStock = stocks.length - 1;
-  const pack: PackStock[] = stocks.map((s) => ({ len: s.lengthMm - 2 * s.trimMm, wid: s.widthMm - 2 * s.trimMm, qty: s.qty }));
+  const pack: PackStock[] = stocks.map((s) => ({ len: s.lengthMm - 2 * s.trimLengthMm, wid: s.widthMm - 2 * s.trimWidthMm, qty: s.qty }));
+  const nominalTrim = opts.trimMm ?? DEFAULT_TRIM_MM;
+  const notes: string[] = [];
+  const sheetStock = stocks[stocks.length - 1];
+  if (sheetStock.trimLengthMm < nominalTrim - EPS) notes.push("A part needs the sheet's full length: its ends are not trimmed.");
+  if (sheetStock.trimWidthMm < nominalTrim - EPS) notes.push("A part needs the sheet's full width: its long edges are not trimmed.");
   const items: PackItem[] = [];
   const unplacedCount = new Map<string, UnplacedPart>();
   g.pieces.forEach((p, id) => {
@@ -88,7 +119,7 @@ function nestGroup(
           partId: p.partId,
           name: p.name,
           qty: 1,
-          reason: `larger than the usable sheet (${pack[newStock].len.toFixed(1)} x ${pack[newStock].wid.toFixed(1)} mm after trim${mode !== 2 ? ", grain fixed" : ""})`,
+          reason: `larger than the sheet (${g.sheetLengthMm.toFixed(1)} x ${g.sheetWidthMm.toFixed(1)} mm${mode !== 2 ? ", grain along its length" : ""})`,
         });
     }
   });
@@ -138,18 +169,20 @@ function nestGroup(
       wasteMm2: stockAreaMm2 - partAreaMm2,
       unplaced: [...unplacedCount.values()],
       attempts,
+      notes,
       strategy,
     },
   };
 }
 
 function layoutSheet(s: PackedSheet, index: number, stock: SheetStock, g: SheetGroup, kerf: number, opts: NestOptions): SheetLayout {
-  const t = stock.trimMm;
+  const tx = stock.trimLengthMm;
+  const ty = stock.trimWidthMm;
   const placements: Placement[] = s.items.map((it) => {
     const p = g.pieces[it.id];
-    return { pieceKey: p.key, partId: p.partId, name: p.name, xMm: it.x + t, yMm: it.y + t, lenMm: it.w, widMm: it.h, rotated: it.rotated, grain: p.grain };
+    return { pieceKey: p.key, partId: p.partId, name: p.name, xMm: it.x + tx, yMm: it.y + ty, lenMm: it.w, widMm: it.h, rotated: it.rotated, grain: p.grain };
   });
-  const usable = { x: t, y: t, w: stock.lengthMm - 2 * t, h: stock.widthMm - 2 * t };
+  const usable = { x: tx, y: ty, w: stock.lengthMm - 2 * tx, h: stock.widthMm - 2 * ty };
   const tree = buildCutTree(
     usable,
     placements.map((p) => ({ x: p.xMm, y: p.yMm, w: p.lenMm, h: p.widMm })),
@@ -178,7 +211,7 @@ function layoutSheet(s: PackedSheet, index: number, stock: SheetStock, g: SheetG
     source: stock.source,
     lengthMm: stock.lengthMm,
     widthMm: stock.widthMm,
-    trimMm: t,
+    usable: { xMm: usable.x, yMm: usable.y, lenMm: usable.w, widMm: usable.h },
     placements,
     cuts,
     offcuts,

@@ -27,7 +27,9 @@ export function sheetGroups(parts: readonly Part[], materials: readonly Material
   const groups = new Map<string, SheetGroup>();
   for (const p of parts) {
     if (p.stock !== "sheet" || p.qty <= 0) continue;
-    const key = `${p.materialId}|${p.thicknessMm}`;
+    // Thickness rounded to 0.1 mm so float noise (19.049999 vs 19.05) does not split a material.
+    const thick = Math.round(p.thicknessMm * 10) / 10;
+    const key = `${p.materialId}|${thick}`;
     let g = groups.get(key);
     if (!g) {
       const m = materials.find((x) => x.id === p.materialId);
@@ -37,7 +39,7 @@ export function sheetGroups(parts: readonly Part[], materials: readonly Material
         key,
         materialId: p.materialId,
         materialName: m?.name ?? p.materialId,
-        thicknessMm: p.thicknessMm,
+        thicknessMm: thick,
         sheetLengthMm: Math.max(a, b),
         sheetWidthMm: Math.min(a, b),
         pieces: [],

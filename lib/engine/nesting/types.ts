@@ -21,8 +21,10 @@ export interface SheetStock {
   /** How many are on hand; Infinity for sheets still to buy. */
   qty: number;
   source: "new" | "offcut";
-  /** Margin trimmed off each edge before parts are laid out, mm (factory edges are often bruised; sawn offcut edges need none). */
-  trimMm: number;
+  /** Margin trimmed off each end (along the length), mm (factory edges are often bruised; sawn offcut edges need none). */
+  trimLengthMm: number;
+  /** Margin trimmed off each long edge, mm. */
+  trimWidthMm: number;
 }
 
 /** A user offcut offered as extra stock. */
@@ -83,7 +85,8 @@ export interface SheetLayout {
   source: "new" | "offcut";
   lengthMm: number;
   widthMm: number;
-  trimMm: number;
+  /** What is left after trimming the edges; all pieces lie inside it. */
+  usable: SheetRect;
   placements: Placement[];
   cuts: Cut[];
   offcuts: Offcut[];
@@ -122,6 +125,8 @@ export interface MaterialNest {
   unplaced: UnplacedPart[];
   /** Layouts tried. */
   attempts: number;
+  /** Things the user should know, in words (edge trim dropped for a full-length part...). */
+  notes: string[];
   /** Name of the heuristic that won. */
   strategy: string;
 }

@@ -60,7 +60,7 @@ export function buildShoppingList(input: ShoppingInput, prices: readonly PriceIt
     for (const b of g.boards) byLength.set(b.lengthMm, (byLength.get(b.lengthMm) ?? 0) + 1);
     for (const [len, count] of [...byLength].sort((a, b) => a[0] - b[0])) {
       const feet = Math.round((len / MM_PER_INCH / 12) * 10) / 10;
-      const widthName = nominalWidthName(g.stockWidthMm) ?? `${(g.stockWidthMm / MM_PER_INCH).toFixed(2)} in wide`;
+      const widthName = nominalWidthName(g.stockWidthMm, g.thicknessMm) ?? `${(g.stockWidthMm / MM_PER_INCH).toFixed(2)} in wide`;
       const bf = boardFeet(g.thicknessMm, g.stockWidthMm, len);
       const p = findPrice(prices, g.materialId);
       // Board prices per board foot become a price per board; a price per board is used as is.

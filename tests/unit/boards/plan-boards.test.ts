@@ -40,6 +40,9 @@ describe("board stock", () => {
     expect(DEFAULT_BOARD_LENGTHS_MM[3]).toBeCloseTo(3657.6, 9);
     expect(DEFAULT_BOARD_WIDTHS_MM[2]).toBeCloseTo(88.9, 9);
     expect(nominalWidthName(88.9)).toBe("1x4");
+    // 2x stock dresses to 1-1/2 in = 38.1 mm thick (PS 20, from memory).
+    expect(nominalWidthName(88.9, 38.1)).toBe("2x4");
+    expect(nominalWidthName(100)).toBeUndefined();
   });
 });
 

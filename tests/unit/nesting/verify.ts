@@ -17,9 +17,10 @@ export function rects(s: SheetLayout): R[] {
 /** Problems found: pieces outside the usable area, or closer than a kerf to each other. */
 export function layoutProblems(s: SheetLayout, kerf: number): string[] {
   const out: string[] = [];
-  const t = s.trimMm;
+  const u = s.usable;
+  if (u.xMm < -EPS || u.yMm < -EPS || u.xMm + u.lenMm > s.lengthMm + EPS || u.yMm + u.widMm > s.widthMm + EPS) out.push("usable area outside the sheet");
   for (const p of s.placements) {
-    if (p.xMm < t - EPS || p.yMm < t - EPS || p.xMm + p.lenMm > s.lengthMm - t + EPS || p.yMm + p.widMm > s.widthMm - t + EPS) out.push(`${p.pieceKey} outside usable area`);
+    if (p.xMm < u.xMm - EPS || p.yMm < u.yMm - EPS || p.xMm + p.lenMm > u.xMm + u.lenMm + EPS || p.yMm + p.widMm > u.yMm + u.widMm + EPS) out.push(`${p.pieceKey} outside usable area`);
   }
   const rs = rects(s);
   for (let i = 0; i < rs.length; i++)
