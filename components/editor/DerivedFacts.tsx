@@ -1,15 +1,13 @@
 "use client";
-import { useMemo } from "react";
 import { useEditor } from "@/lib/client/react/EditorContext";
-import { useDerived, useDoc } from "@/lib/client/react/useEditorState";
+import { useDerived } from "@/lib/client/react/useEditorState";
 
 /** Read-only numbers the engine works out for a fixture: size, work surface, flush shelf height, drawer boxes. */
 export function DerivedFacts({ id }: { id: string }) {
   const ed = useEditor();
   const placed = useDerived((s) => s.fixtureById.get(id));
-  const fixture = useDoc((d) => d.fixtures.find((f) => f.id === id));
-  const doc = ed.doc;
-  const drawerParts = useMemo(() => (fixture ? ed.engine.fixtureParts(doc, id).filter((p) => /drawer/i.test(p.name)) : []), [ed, doc, id, fixture]);
+  const parts = useDerived((s) => s.derived?.parts);
+  const drawerParts = (parts ?? []).filter((p) => p.fixtureId === id && /drawer/i.test(p.name));
   if (!placed) return null;
   const f = ed.formatLength.bind(ed);
   const tool = placed.boxes.find((b) => b.role === "tool");

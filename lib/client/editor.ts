@@ -1,7 +1,7 @@
 import type { SolvedWall } from "@/lib/engine/room/types";
 import type { Footprint, PlacedFixture } from "@/lib/engine/fixtures/types";
 import type { FixtureDoc, PlanDocument } from "@/lib/engine/plan/schema";
-import { createDerivedStore, recompute, type DerivedStore } from "./derived/derived-store";
+import { createDerivedStore, recompute, type Analyser, type DerivedStore } from "./derived/derived-store";
 import type { EnginePort } from "./engine-port";
 import { createPlanStore, PlanHistory, type DocRecipe } from "./store/plan-store";
 import { createUiStore, type UiState, type UiStore } from "./store/ui-store";
@@ -24,15 +24,17 @@ export class Editor {
   readonly engine: EnginePort;
   readonly tools: ToolController;
   private readonly unsub: () => void;
+  private readonly analyse: Analyser;
 
   constructor(init: EditorInit) {
     this.engine = init.engine;
     this.history = new PlanHistory(createPlanStore(init.doc));
     this.ui = createUiStore(init.ui);
     this.derived = createDerivedStore();
-    recompute(this.derived, this.engine, init.doc);
+    this.analyse = this.engine.createAnalyser();
+    recompute(this.derived, this.analyse, init.doc);
     this.unsub = this.history.store.subscribe((s) => {
-      recompute(this.derived, this.engine, s.doc);
+      recompute(this.derived, this.analyse, s.doc);
       this.pruneSelection(s.doc);
     });
     this.tools = new ToolController(this);

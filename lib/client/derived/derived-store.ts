@@ -23,15 +23,15 @@ export function createDerivedStore() {
 
 export type DerivedStore = ReturnType<typeof createDerivedStore>;
 
-/** Re-derives and re-checks the plan; passes the previous result so the engine can work incrementally. */
-export function recompute(store: DerivedStore, engine: EnginePort, doc: PlanDocument): void {
+export type Analyser = ReturnType<EnginePort["createAnalyser"]>;
+
+/** Re-derives and re-checks the plan (the analyser works incrementally when only fixtures changed). */
+export function recompute(store: DerivedStore, analyse: Analyser, doc: PlanDocument): void {
   const prev = store.getState();
   if (prev.doc === doc) return;
   const t0 = performance.now();
   try {
-    const previous = prev.doc && prev.derived ? { doc: prev.doc, derived: prev.derived } : undefined;
-    const derived = engine.derive(doc, previous);
-    const findings = engine.evaluate(doc, derived);
+    const { derived, findings } = analyse(doc);
     const fixtureById = new Map(derived.fixtures.map((f) => [f.id, f]));
     store.setState({ doc, derived, findings, fixtureById, error: null, lastMs: performance.now() - t0 });
   } catch (e) {

@@ -10,8 +10,8 @@ import type { PointerInput } from "@/lib/client/tools/types";
  * A stand-in engine so the store and tools are tested on their own: the room is taken as square
  * (each wall turns 90 degrees counter-clockwise), a fixture is as wide as its `widthMm` param.
  */
-export const stubEngine: EnginePort = {
-  derive(doc) {
+function stubDerive(doc: PlanDocument): Derived {
+  {
     const walls: SolvedWall[] = [];
     let at = { x: 0, y: 0 };
     let dir = { x: 1, y: 0 };
@@ -34,8 +34,11 @@ export const stubEngine: EnginePort = {
       hardware: [],
     };
     return derived;
-  },
-  evaluate: () => [],
+  }
+}
+
+export const stubEngine: EnginePort = {
+  createAnalyser: () => (doc) => ({ derived: stubDerive(doc), findings: [] }),
   kinds: () => [
     { kind: "base", title: "Base", blurb: "A 600 mm box." },
     { kind: "wide", title: "Wide", blurb: "A 1200 mm box." },
