@@ -1,5 +1,6 @@
 /** Helpers for the sharing and teaching tests: caught mail, links in it, and a plan with every role. */
-import { Client, newMember } from "./client";
+import type { Client} from "./client";
+import { newMember } from "./client";
 
 export const MAIL_URL = process.env.MAIL_CATCHER_URL ?? "";
 

@@ -1,0 +1,24 @@
+"use client";
+
+import type { PlanDocument } from "@/lib/engine/plan/schema";
+import { ElevationSketch } from "@/components/sharing/ElevationSketch";
+import { PlanSketch } from "@/components/sharing/PlanSketch";
+import { RoomView3D } from "@/components/sharing/RoomView3D";
+import type { Step } from "./steps";
+
+/** What a step shows: the plan, one wall's elevation, or the 3D room, with its fixtures highlighted. */
+export function StepStage({ document, step }: { document: PlanDocument; step: Step }) {
+  const lit = [...step.highlight.fixtureIds, ...step.highlight.zoneIds];
+  if (step.view === "elevation") {
+    const wallId = step.wallId ?? document.room.walls[0]?.id;
+    return (
+      <div className="flex h-full items-center justify-center bg-white p-4">
+        <div className="w-full max-w-5xl">
+          <ElevationSketch document={document} wallId={wallId} highlight={lit} />
+        </div>
+      </div>
+    );
+  }
+  if (step.view === "plan") return <PlanSketch document={document} highlight={lit} className="bg-white" />;
+  return <RoomView3D document={document} />;
+}
