@@ -7,7 +7,8 @@ import config from "../mikro-orm.config";
 import { UserSchema, type AccountRole } from "../entities/User";
 import { PlanSchema } from "../entities/Plan";
 import { hashPassword } from "../lib/server/passwords";
-import { demoDocument } from "./demo-document";
+import { demoPlan } from "../lib/engine/demo/demo-plan";
+import { parsePlan } from "../lib/engine/plan/parse";
 
 export const DEMO_PASSWORD = "sawdust-and-pine-42";
 const ACCOUNTS: { email: string; name: string; role: AccountRole }[] = [
@@ -27,7 +28,9 @@ async function main() {
   await em.flush();
   const robin = await em.findOneOrFail(UserSchema, { email: ACCOUNTS[0].email });
   if (!(await em.count(PlanSchema, { owner: robin.id, name: "Two-car garage shop" }))) {
-    const document = demoDocument();
+    const parsed = parsePlan(demoPlan());
+    if (!parsed.ok) throw new Error(`the demo plan does not validate: ${JSON.stringify(parsed.issues)}`);
+    const document = parsed.plan;
     em.create(PlanSchema, { owner: robin, name: "Two-car garage shop", units: document.settings.units, document: document as unknown as Record<string, unknown>, version: 1 });
     await em.flush();
   }
