@@ -1,12 +1,23 @@
+import { derivePlan } from "@/lib/engine/derive";
 import { getFixtureKind } from "@/lib/engine/fixtures/registry";
 import type { FixtureContext, HardwareItem, Part } from "@/lib/engine/fixtures/types";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 
 /**
- * Parts and hardware of every fixture in the plan, straight from each kind's definition.
- * Fixtures whose parameters do not validate are skipped (the editor shows those errors).
+ * Parts and hardware of every fixture in the plan, from the engine's derivation (which knows
+ * neighbouring counters). If the room cannot be solved, each kind's own definition is used.
  */
 export function planParts(plan: PlanDocument): { parts: Part[]; hardware: HardwareItem[] } {
+  try {
+    const d = derivePlan(plan);
+    return { parts: d.parts, hardware: d.hardware };
+  } catch {
+    return partsByKind(plan);
+  }
+}
+
+/** Fixtures whose parameters do not validate are skipped (the editor shows those errors). */
+function partsByKind(plan: PlanDocument): { parts: Part[]; hardware: HardwareItem[] } {
   const ctx: FixtureContext = { settings: plan.settings, materials: plan.materials };
   const parts: Part[] = [];
   const hardware: HardwareItem[] = [];

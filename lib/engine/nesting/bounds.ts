@@ -18,3 +18,44 @@ export function sheetLowerBound(
   // A hair of tolerance so float noise on an exact fit does not add a sheet.
   return Math.ceil(need / per - 1e-9);
 }
+
+/** A piece for the conflict bound: extents along the sheet's length and width, and whether it may turn. */
+export interface BoundPiece {
+  len: number;
+  wid: number;
+  /** 0: fixed as given; 1: fixed turned; 2: either way. */
+  mode: 0 | 1 | 2;
+}
+
+function orientations(p: BoundPiece): [number, number][] {
+  if (p.mode === 0) return [[p.len, p.wid]];
+  if (p.mode === 1) return [[p.wid, p.len]];
+  return [
+    [p.len, p.wid],
+    [p.wid, p.len],
+  ];
+}
+
+/** Two pieces can share a sheet only if, in some orientation, they sit side by side along one axis with a kerf between. */
+function canShare(a: BoundPiece, b: BoundPiece, L: number, W: number, k: number): boolean {
+  for (const [ax, ay] of orientations(a))
+    for (const [bx, by] of orientations(b)) {
+      if (ax + k + bx <= L + 1e-9 && Math.max(ay, by) <= W + 1e-9) return true;
+      if (ay + k + by <= W + 1e-9 && Math.max(ax, bx) <= L + 1e-9) return true;
+    }
+  return false;
+}
+
+/**
+ * Fewest sheets from pieces that cannot share a sheet with each other (a clique of such pieces,
+ * found greedily from the largest): each needs a sheet of its own. A count; usable sizes in mm.
+ * Complements the area bound when long or deep pieces leave unusable space beside them.
+ */
+export function conflictLowerBound(pieces: readonly BoundPiece[], usableLengthMm: number, usableWidthMm: number, kerfMm: number): number {
+  const sorted = [...pieces].sort((a, b) => b.len * b.wid - a.len * a.wid);
+  const clique: BoundPiece[] = [];
+  for (const p of sorted) {
+    if (clique.every((q) => !canShare(p, q, usableLengthMm, usableWidthMm, kerfMm))) clique.push(p);
+  }
+  return clique.length;
+}

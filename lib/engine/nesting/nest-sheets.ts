@@ -1,6 +1,6 @@
 import type { Part } from "../fixtures/types";
 import type { Material } from "../plan/schema";
-import { sheetLowerBound } from "./bounds";
+import { conflictLowerBound, sheetLowerBound } from "./bounds";
 import { buildCutTree } from "./cut-tree";
 import type { PackItem, PackOutcome, PackStock, PackedSheet } from "./guillotine";
 import { DEFAULT_REUSABLE_MIN_LENGTH_MM, DEFAULT_REUSABLE_MIN_WIDTH_MM, DEFAULT_TRIM_MM, sheetGroups } from "./pieces";
@@ -21,10 +21,13 @@ export function nestSheets(parts: readonly Part[], materials: readonly Material[
   const groups = sheetGroups(parts, materials);
   const total = groups.reduce((s, g) => s + g.pieces.length, 0);
   const budget = opts.timeBudgetMs ?? DEFAULT_BUDGET_MS;
-  const out: MaterialNest[] = [];
+  const out: MaterialNest[] = new Array(groups.length);
   let stopped = false;
   let spent = 0;
-  for (const g of groups) {
+  // Small materials first: they finish their fixed heuristics quickly and leave the rest of the budget to the big ones.
+  const order = groups.map((_, i) => i).sort((a, b) => groups[a].pieces.length - groups[b].pieces.length);
+  for (const gi of order) {
+    const g = groups[gi];
     // Share the budget by piece count; unspent time rolls over to later materials.
     const share = total > 0 ? (budget * g.pieces.length) / total : budget;
     const deadline = Math.min(t0 + budget, performance.now() + share + Math.max(0, spent));
@@ -35,7 +38,7 @@ export function nestSheets(parts: readonly Part[], materials: readonly Material[
       return opts.onProgress({ fraction, materialId: g.materialId, bestSheets: best, lowerBound: lb, attempts }) !== false;
     });
     spent = share - (performance.now() - before);
-    out.push(r.nest);
+    out[gi] = r.nest;
     if (r.stopped) {
       stopped = true;
       // Remaining materials still get a quick, single-heuristic layout so the result is complete.
@@ -124,13 +127,15 @@ function nestGroup(
     }
   });
   const offcutArea = stocks.slice(0, newStock).reduce((s, o) => s + (o.lengthMm + kerf) * (o.widthMm + kerf) * o.qty, 0);
-  const lowerBound = sheetLowerBound(
+  const areaBound = sheetLowerBound(
     items.map((i) => ({ lengthMm: i.len, widthMm: i.wid })),
     pack[newStock].len,
     pack[newStock].wid,
     kerf,
     offcutArea,
   );
+  // Offcuts could hold some of the clashing pieces, so that bound only applies without them.
+  const lowerBound = newStock === 0 ? Math.max(areaBound, conflictLowerBound(items, pack[newStock].len, pack[newStock].wid, kerf)) : areaBound;
   let stopped = false;
   let outcome: PackOutcome = { sheets: [], leftover: [] };
   let strategy = "none";

@@ -90,6 +90,9 @@ export function better(a: readonly number[], b: readonly number[]): boolean {
   return false;
 }
 
+/** The one-sheet-at-a-time heuristics (the first fixed ones) always run: they are usually the best. */
+const MIN_ATTEMPTS = 18;
+
 export interface SearchResult {
   outcome: PackOutcome;
   strategy: string;
@@ -135,7 +138,7 @@ export function searchLayouts(items: PackItem[], stocks: PackStock[], kerf: numb
     }
     // Always finish at least the first fixed heuristics; after that stop when time is up, or
     // when the bound is reached and the fixed set is done.
-    if (attempts >= 6 && now() > lim.deadline) break;
+    if (attempts >= MIN_ATTEMPTS && now() > lim.deadline) break;
     if (i >= fixed.length - 1 && bestKey[0] === 0 && bestKey[1] <= lim.lowerBound) break;
   }
   return { outcome: best as PackOutcome, strategy: bestName, attempts, stopped };
