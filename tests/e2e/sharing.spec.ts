@@ -1,0 +1,89 @@
+import { test, expect, type Page } from "@playwright/test";
+import { randomUUID } from "node:crypto";
+
+async function signIn(page: Page, email: string, password: string) {
+  await page.goto("/signin");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/plans$/);
+}
+
+test.setTimeout(180_000);
+
+test("owner shares a read-only link; a visitor opens it, signs up and copies it; revoking stops it", async ({ browser }) => {
+  // The owner: a fresh account with its own plan, so the test does not depend on other tests' data.
+  const owner = await browser.newContext();
+  const op = await owner.newPage();
+  const ownerEmail = `owner-${randomUUID().slice(0, 8)}@example.test`;
+  const created = await op.request.post("/api/v1/account", { data: { name: "Morgan Spruce", email: ownerEmail, password: "Spruce-and-fir-52" } });
+  expect(created.status()).toBe(201);
+  await signIn(op, ownerEmail, "Spruce-and-fir-52");
+  const plan = await op.request.post("/api/v1/plans", {
+    data: {
+      name: "Tandem garage shop",
+      document: { schemaVersion: 1, room: { walls: [{ id: "w1", label: "Door wall", lengthMm: 6100 }, { id: "w2", label: "Side wall", lengthMm: 7300 }, { id: "w3", label: "Back wall", lengthMm: 6100 }, { id: "w4", label: "House wall", lengthMm: 7300 }] } },
+    },
+  });
+  const planId = (await plan.json()).plan.id as string;
+
+  await op.goto(`/plans/${planId}/share`);
+  await expect(op.getByRole("heading", { level: 1 })).toContainText("Tandem garage shop");
+  await op.getByLabel("Note (who it is for)").fill("for the neighbour");
+  await op.getByLabel("Stops working after").selectOption("7");
+  await op.getByRole("button", { name: "Make a link" }).click();
+  const url = await op.getByTestId("new-link").inputValue();
+  expect(url).toMatch(/\/s\/[A-Za-z0-9_-]{43}$/);
+  const path = new URL(url).pathname;
+  await op.screenshot({ path: "tests/artifacts/sharing-owner-links.png", fullPage: true });
+
+  // A visitor without an account opens the link: the plan is there, read-only, and kept out of search engines.
+  const visitor = await browser.newContext();
+  const vp = await visitor.newPage();
+  const res = await vp.goto(path);
+  expect(res?.status()).toBe(200);
+  await expect(vp.getByRole("heading", { level: 1 })).toHaveText("Tandem garage shop");
+  await expect(vp.getByTestId("read-only-note")).toBeVisible();
+  expect(await vp.locator('meta[name="robots"]').getAttribute("content")).toContain("noindex");
+  await vp.getByRole("tab", { name: "Plan" }).click();
+  await expect(vp.getByRole("img", { name: "Floor plan of the room" })).toBeVisible();
+  await expect(vp.getByText(/Side wall/)).toBeVisible();
+  // Nothing to edit: no text fields, no save.
+  await expect(vp.getByRole("textbox")).toHaveCount(0);
+  await expect(vp.getByRole("button", { name: /save/i })).toHaveCount(0);
+  // The API refuses a write from this browser too.
+  expect((await vp.request.put(`/api/v1/plans/${planId}`, { data: { document: {}, version: 1 } })).status()).toBe(401);
+  await vp.screenshot({ path: "tests/artifacts/sharing-visitor-plan.png", fullPage: true });
+
+  // The visitor signs up from the shared page and lands back on it, one click from a copy.
+  await vp.getByRole("link", { name: "Sign up and copy" }).click();
+  await vp.getByLabel("Your name").fill("Jordan Poplar");
+  await vp.getByLabel("E-mail").fill(`visitor-${randomUUID().slice(0, 8)}@example.test`);
+  await vp.getByLabel("Password").fill("Poplar-and-oak-73");
+  await vp.getByRole("button", { name: "Create account" }).click();
+  await expect(vp).toHaveURL(new RegExp(`${path}\\?copy=1$`));
+  await vp.getByRole("button", { name: "Copy into my plans" }).click();
+  await expect(vp).toHaveURL(/\/plans\/[0-9a-f-]{36}$/);
+  await expect(vp.getByRole("heading", { level: 1 })).toContainText("Tandem garage shop (copy)");
+  const copyId = vp.url().split("/").pop()!;
+  expect(copyId).not.toBe(planId);
+  const copy = await (await vp.request.get(`/api/v1/plans/${copyId}`)).json();
+  expect(copy.plan.role).toBe("owner");
+  expect(copy.plan.copiedFrom).toContain("shared by Morgan Spruce");
+  await vp.screenshot({ path: "tests/artifacts/sharing-visitor-copy.png", fullPage: true });
+
+  // The owner sees the link was opened, then revokes it; the link stops working.
+  await op.reload();
+  const row = op.locator("tr", { hasText: "for the neighbour" });
+  await expect(row.locator("td").nth(4)).not.toHaveText("0");
+  await row.getByRole("button", { name: "Revoke" }).click();
+  await expect(op.locator("tr[data-state=revoked]", { hasText: "for the neighbour" })).toBeVisible();
+  // A fresh page (the plan editor left open may hold the old one with an unsaved-changes prompt).
+  const later = await visitor.newPage();
+  const gone = await later.goto(path);
+  expect(gone?.status()).toBe(404);
+  expect((await later.request.get(`/api/v1/shared/${path.split("/")[2]}`)).status()).toBe(404);
+  await later.screenshot({ path: "tests/artifacts/sharing-revoked.png" });
+  await owner.close();
+  await visitor.close();
+});
