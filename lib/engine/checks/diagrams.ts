@@ -67,8 +67,13 @@ function samplePlan(room: Partial<PlanDocumentInput["room"]>): PlanDocument {
   });
 }
 
+/** The zones as shapes; thin ones (a panel's dedicated space) go unlabelled so their text does not cover the drawing. */
 function zonesAsShapes(plan: PlanDocument): DiagramShape[] {
-  return roomZones(plan, sampleRoom()).map((z) => ({ polygon: z.prism.polygon, role: z.purpose.startsWith("parking-vehicle") ? "obstacle" : "zone", label: z.label }));
+  return roomZones(plan, sampleRoom()).map((z) => ({
+    polygon: z.prism.polygon,
+    role: z.purpose === "parking-vehicle" ? "obstacle" : "zone",
+    label: z.purpose === "panel-dedicated-space" ? undefined : z.label,
+  }));
 }
 
 /** The drawing for a rule, or null when a picture would not help (advice rules). */
@@ -78,7 +83,7 @@ export function ruleDiagram(ruleId: string): RuleDiagram | null {
       const plan = samplePlan({ obstacles: [{ id: "panel", kind: "panel", placement: { mode: "wall", wallId: "w1", offsetMm: 1000, elevationMm: 1200 }, widthMm: 380, heightMm: 760, depthMm: 100, voltageClass: "0-150", condition: 1 }] });
       return {
         view: "plan",
-        caption: "Plan view: the working space in front of a 0-150 V panel and its dedicated space.",
+        caption: "Plan view: the working space in front of a 0-150 V panel. The panel's own width and depth (its dedicated space) stay clear from the floor to 6 ft above it.",
         shapes: [wallLine(600, 1800), ...zonesAsShapes(plan), box("obstacle", 1000, 0, 380, 100, "Panel")],
         dims: [
           { from: { x: 1190 - 381, y: 1100 }, to: { x: 1190 + 381, y: 1100 }, label: "30 in min." },
@@ -132,7 +137,7 @@ export function ruleDiagram(ruleId: string): RuleDiagram | null {
           box("fixture", 300, 0, L / 2, 610, "Counter"),
           box("stock", blade - L, 100, L, 140, "Stock path"),
           box("stock", blade, 100, L, 140),
-          box("blocked", L - 600, 0, 300, 300, "Rack: blocks"),
+          box("blocked", L - 600, 0, 300, 300, "Rack"),
         ],
         dims: [
           { from: { x: blade, y: 700 }, to: { x: blade + L, y: 700 }, label: "longest stock" },
@@ -187,7 +192,13 @@ export function ruleDiagram(ruleId: string): RuleDiagram | null {
       return {
         view: "elevation",
         caption: "Elevation: light work 10-15 cm below the elbow, heavy work 15-40 cm below.",
-        shapes: [box("person", 900, 0, 300, 1755, "You"), box("zone", 0, elbow - 150, 800, 50, "Light work"), box("zone", 0, elbow - 400, 800, 250, "Heavy work"), box("fixture", 0, 0, 800, 914, "Counter")],
+        shapes: [
+          box("fixture", 0, 0, 800, 914, "Counter"),
+          box("zone", 1400, elbow - 150, 600, 50, "Light work"),
+          box("zone", 1400, elbow - 400, 600, 250, "Heavy work"),
+          box("person", 900, 0, 300, 1755, "You"),
+          box("stock", 0, elbow - 4, 2000, 8, "Elbow height"),
+        ],
         dims: [{ from: { x: -100, y: 914 }, to: { x: -100, y: elbow }, label: "below elbow" }],
       };
     }
