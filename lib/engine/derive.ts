@@ -4,6 +4,7 @@ import { counterSpan, neighbourCounterHeight } from "./fixtures/place/neighbours
 import { placeObstacles } from "./fixtures/place/obstacles";
 import type { FixtureResult } from "./fixtures/place/place-fixture";
 import { placeResolved, resolveFixture } from "./fixtures/place/place-fixture";
+import { COUNTER_KINDS } from "./fixtures/registry";
 import type { FixtureContext } from "./fixtures/types";
 import type { FixtureDoc, PlanDocument } from "./plan/schema";
 import { solveRoom } from "./room/solve";
@@ -102,7 +103,7 @@ export function rederiveFixtures(plan: PlanDocument, previous: Derived, changedI
   const room = previous.room;
   const base = planFixtureContext(plan);
   const prev = new Map(previous.fixtures.map((f) => [f.id, f]));
-  const counterChanged = plan.fixtures.some((d) => changed.has(d.id) && d.kind !== "tool-shelf") || previous.fixtures.some((f) => changed.has(f.id));
+  const counterChanged = plan.fixtures.some((d) => changed.has(d.id) && COUNTER_KINDS.has(d.kind)) || previous.fixtures.some((f) => changed.has(f.id) && COUNTER_KINDS.has(f.kind));
   const redo = (d: FixtureDoc) => changed.has(d.id) || !prev.has(d.id) || (NEEDS_NEIGHBOURS.has(d.kind) && counterChanged);
   const oldParts = groupBy(previous.parts, (p) => p.fixtureId);
   const oldHardware = groupBy(previous.hardware, (h) => h.fixtureId);
