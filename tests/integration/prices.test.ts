@@ -52,3 +52,50 @@ describe.skipIf(!hasServer)("price list API against the real server and PostgreS
     expect(dup.status).toBe(422);
   });
 });
+
+describe.skipIf(!hasServer)("plan CSV exports", () => {
+  let alice: Client;
+  let bob: Client;
+  let planId = "";
+  beforeAll(async () => {
+    alice = (await newMember("csv-a")).client;
+    bob = (await newMember("csv-b")).client;
+    const document = {
+      schemaVersion: 1,
+      room: { walls: [{ id: "a", lengthMm: 6000 }, { id: "b", lengthMm: 5000 }, { id: "c", lengthMm: 6000 }, { id: "d", lengthMm: 5000 }] },
+      fixtures: [{ id: "cab-1", kind: "base-cabinet", label: "Cabinet, left", placement: { mode: "wall", wallId: "a", offsetMm: 0 }, params: {} }],
+    };
+    const r = await alice.post("/api/v1/plans", { name: "Export test", document });
+    expect(r.status).toBe(201);
+    planId = r.body.plan.id;
+  });
+
+  it("downloads the parts list as CSV for members only", async () => {
+    const res = await alice.raw(`/api/v1/plans/${planId}/export/parts.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toContain("text/csv");
+    expect(res.headers.get("content-disposition")).toContain("export-test-parts.csv");
+    const text = await res.text();
+    const lines = text.split("\r\n");
+    expect(lines[0]).toBe("Fixture,Part,Qty,Length,Width,Thickness,Length (mm),Width (mm),Thickness (mm),Material,Stock,Grain,Edges,Joinery");
+    expect(lines.length).toBeGreaterThan(5);
+    expect((await bob.get(`/api/v1/plans/${planId}/export/parts.csv`)).status).toBe(404);
+    expect((await new Client().get(`/api/v1/plans/${planId}/export/parts.csv`)).status).toBe(401);
+  });
+
+  it("prices the shopping list with my own prices and checks the allowance", async () => {
+    await alice.put("/api/v1/prices", { items: [{ key: "ply-18", name: "My ply", unit: "sheet", packSize: 1, priceCents: 1000 }] });
+    const res = await alice.raw(`/api/v1/plans/${planId}/export/shopping.csv?allowance=0`);
+    expect(res.status).toBe(200);
+    const text = await res.text();
+    // The 3/4 in plywood line carries my price, 1000 cents a sheet, and no "example" mark.
+    const ply = text.split("\r\n").find((l) => l.startsWith("sheet,") && l.includes(",10.00,"));
+    expect(ply, text).toBeDefined();
+    expect(ply).toContain(",no,");
+    expect(text).toMatch(/\r\ntotal,All,/);
+    const bad = await alice.get(`/api/v1/plans/${planId}/export/shopping.csv?allowance=abc`);
+    expect(bad.status).toBe(422);
+    expect(bad.body.error.fields.allowance).toBeDefined();
+    await alice.del("/api/v1/prices");
+  });
+});
