@@ -69,7 +69,13 @@ export function useNesting(parts: readonly Part[], materials: readonly Material[
       if (busy.current) stopWorker();
       busy.current = true;
       if (!worker.current) {
-        worker.current = new Worker(new URL("./nest-worker.ts", import.meta.url), { type: "module" });
+        try {
+          worker.current = new Worker(new URL("./nest-worker.ts", import.meta.url), { type: "module" });
+        } catch {
+          // No module workers here (old browser, strict CSP): run on the main thread instead.
+          runNestRequest(req, onReply);
+          return;
+        }
       }
       worker.current.onmessage = (e: MessageEvent<NestReply>) => onReply(e.data);
       worker.current.onerror = (e) => onReply({ id, type: "error", message: e.message || "The nesting worker failed." });

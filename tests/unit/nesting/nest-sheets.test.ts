@@ -2,7 +2,7 @@ import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import type { Grain, Part } from "@/lib/engine/fixtures/types";
 import { nestSheets } from "@/lib/engine/nesting/nest-sheets";
-import { sheetLowerBound } from "@/lib/engine/nesting/bounds";
+import { conflictLowerBound, sheetLowerBound } from "@/lib/engine/nesting/bounds";
 import { DEFAULT_TRIM_MM } from "@/lib/engine/nesting/pieces";
 import type { NestResult } from "@/lib/engine/nesting/types";
 import { cabinetParts, countPieces, fullShop, randomParts, TEST_MATERIALS, threeCabinetRun } from "./part-sets";
@@ -203,5 +203,22 @@ describe("test verifiers", () => {
     expect(layoutProblems({ ...sheet, placements: [p("a", 0), p("b", 42)] }, 3)).toHaveLength(1);
     expect(layoutProblems({ ...sheet, placements: [p("a", 0), p("b", 43)] }, 3)).toHaveLength(0);
     expect(layoutProblems({ ...sheet, placements: [p("a", 61)] }, 3)).toHaveLength(1);
+  });
+});
+
+describe("conflictLowerBound", () => {
+  it("counts pieces no two of which fit one sheet", () => {
+    // Two 48 x 24 in panels, grain along the 48 in, on an untrimmed 2440 x 1220 mm sheet with a 1/8 in kerf:
+    // end to end 1219.2 + 3.175 + 1219.2 = 2441.575 > 2440, side by side 609.6 + 3.175 + 609.6 = 1222.375 > 1220.
+    const panel = { len: 1219.2, wid: 609.6, mode: 0 as const };
+    expect(conflictLowerBound([panel, panel], 2440, 1220, KERF)).toBe(2);
+    // With no kerf they fit side by side (1219.2 <= 1220); free to turn, they stand side by side along the length.
+    expect(conflictLowerBound([panel, panel], 2440, 1220, 0)).toBe(1);
+    expect(conflictLowerBound([{ ...panel, mode: 2 }, { ...panel, mode: 2 }], 2440, 1220, KERF)).toBe(1);
+    // The area bound alone says 1 here: 2 x 1222.375 x 612.775 = 1,498,090 < 2443.175 x 1223.175 = 2,988,390.
+    expect(sheetLowerBound([{ lengthMm: 1219.2, widthMm: 609.6 }, { lengthMm: 1219.2, widthMm: 609.6 }], 2440, 1220, KERF)).toBe(1);
+    // 1300 x 700 with grain along the length: end to end 2603.2 > 2425.7 usable, side by side 1403.2 > 1206.5.
+    const fixed = { len: 1300, wid: 700, mode: 0 as const };
+    expect(conflictLowerBound([fixed, fixed, fixed], 2425.7, 1206.5, KERF)).toBe(3);
   });
 });
