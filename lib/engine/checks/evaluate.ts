@@ -42,7 +42,15 @@ export function evaluatePlan(plan: PlanDocument, derived: Derived, opts: Evaluat
 }
 
 /** How far a fixture's checks reach, on the floor: its body and zones, grown by the walkway, or by the longest stock for a saw. */
-function reachBounds(f: PlacedFixture, ctx: CheckContext): Bounds2 {
+function reachBounds(f: PlacedFixture, ctx: CheckContext, cache: WeakMap<PlacedFixture, Bounds2>): Bounds2 {
+  const hit = cache.get(f);
+  if (hit) return hit;
+  const b = reachBoundsOf(f, ctx);
+  cache.set(f, b);
+  return b;
+}
+
+function reachBoundsOf(f: PlacedFixture, ctx: CheckContext): Bounds2 {
   let b = polygonBounds(f.body.polygon);
   for (const z of f.zones) b = unionBounds(b, polygonBounds(z.prism.polygon));
   const grow = isMiterStation(f) ? Math.max(ctx.numbers.longestStockMm, ctx.numbers.walkwayMm) : ctx.numbers.walkwayMm;
@@ -63,6 +71,8 @@ export function createChecker(plan: PlanDocument, derived: Derived, opts: Evalua
   let ctx = buildContext(plan, derived, opts);
   let current = RULES.flatMap((r) => runRule(r, plan, ctx));
   let rechecked: ReadonlySet<string> = new Set();
+  // Reach bounds per placed fixture object: unchanged fixtures keep their object across re-derives.
+  const reachCache = new WeakMap<PlacedFixture, Bounds2>();
   return {
     findings: () => sortFindings(current),
     lastRechecked: () => rechecked,
@@ -107,7 +117,7 @@ export function createChecker(plan: PlanDocument, derived: Derived, opts: Evalua
       const subjects = new Set<string>(changed);
       for (const f of nextDerived.fixtures) {
         if (subjects.has(f.id)) continue;
-        const rb = reachBounds(f, ctx);
+        const rb = reachBounds(f, ctx, reachCache);
         if (touched.some((t) => boundsOverlap(rb, t))) subjects.add(f.id);
       }
       for (const fd of current) if (fd.fixtureIds.some((x) => changed.has(x)) && fd.subjectId) for (const s of fd.subjectId.split("|")) subjects.add(s);

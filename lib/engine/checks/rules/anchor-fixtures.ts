@@ -1,6 +1,6 @@
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
-import { isWallHung } from "../kinds";
+import { KIND, isWallHung } from "../kinds";
 import type { Finding, Rule } from "../types";
 
 const ID = "anchor-fixtures";
@@ -9,7 +9,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const tall = ctx.numbers.tallFixtureMm;
   for (const f of ctx.fixtures) {
-    if (ids && !ids.has(f.id)) continue;
+    // A stop track rides on its counter; the counter is what gets fastened.
+    if ((ids && !ids.has(f.id)) || f.kind === KIND.stopTrack) continue;
     const hung = isWallHung(f);
     const height = f.body.zMax - f.body.zMin;
     if (!hung && height < tall) continue;

@@ -11,7 +11,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const elbow = n.elbowHeightMm;
   const note = ctx.presetNote("elbowHeightMm", "lightWorkBelowElbowMinMm", "lightWorkBelowElbowMaxMm", "heavyWorkBelowElbowMaxMm");
   for (const f of ctx.fixtures) {
-    if (!isCounter(f) || (ids && !ids.has(f.id))) continue;
+    if ((ids && !ids.has(f.id)) || !isCounter(f)) continue;
     const top = worldWorkSurface(f)!;
     const below = elbow - top;
     const tooHigh = below < n.lightWorkBelowElbowMinMm - 0.5;

@@ -11,9 +11,10 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const n = ctx.numbers;
   const note = ctx.presetNote("reachMaxMm", "reachOverObstructionMm");
   for (const f of ctx.fixtures) {
-    if (!hasShelves(f) || (ids && !ids.has(f.id))) continue;
-    const shelves = f.boxes.filter((b) => b.role === "shelf");
-    const top = shelves.length ? f.origin.z + Math.max(...shelves.map((b) => b.z + b.h)) : f.body.zMax;
+    if ((ids && !ids.has(f.id)) || !hasShelves(f)) continue;
+    let shelfTop = -Infinity;
+    for (const b of f.boxes) if (b.role === "shelf" && b.z + b.h > shelfTop) shelfTop = b.z + b.h;
+    const top = shelfTop > -Infinity ? f.origin.z + shelfTop : f.body.zMax;
     // Reaching over a counter deeper than 20 in lowers the limit.
     let over: string | undefined;
     for (const s of ctx.solids.query(polygonBounds(f.body.polygon))) {

@@ -1,4 +1,3 @@
-import { shelfRunParamsSchema } from "../../fixtures/shelf-run/params";
 import { shelfSag } from "../../sag/shelf-sag";
 import { stiffnessOf } from "../../sag/moe";
 import type { CheckContext } from "../context";
@@ -19,14 +18,13 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const seen = new Set<string>();
   const docs = new Map(ctx.plan.fixtures.map((d) => [d.id, d]));
   for (const p of ctx.parts) {
-    if (!/shelf/i.test(p.name) || (ids && !ids.has(p.fixtureId))) continue;
+    if ((ids && !ids.has(p.fixtureId)) || !/shelf/i.test(p.name)) continue;
     const key = `${p.fixtureId}|${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
     if (seen.has(key)) continue;
     seen.add(key);
     // A shelf run says its own load and stiffness; other shelves carry the rule's book load.
     const doc = docs.get(p.fixtureId);
-    const run = doc?.kind === "shelf-run" ? shelfRunParamsSchema.safeParse(doc.params) : undefined;
-    const rp = run?.success ? run.data : undefined;
+    const rp = doc?.kind === "shelf-run" ? runLoad(doc.params) : undefined;
     const stiff = rp?.stiffnessKey ?? stiffnessKeyFor(p.materialId, ctx.plan.materials);
     const load = rp ? rp.loadLbPerFt : lbPerFt;
     const r = shelfSag({
@@ -57,6 +55,20 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     );
   }
   return out;
+}
+
+/** A shelf run's own load and stiffness, read from its parameters as parsePlan left them (defaults filled in). */
+function runLoad(params: Record<string, unknown>): { loadLbPerFt: number; centreLoadLb?: number; longTerm?: boolean; stiffnessKey?: string } | undefined {
+  const load = params.loadLbPerFt;
+  if (typeof load !== "number" || !Number.isFinite(load) || load < 0) return undefined;
+  const centre = params.centreLoadLb;
+  const key = params.stiffnessKey;
+  return {
+    loadLbPerFt: load,
+    centreLoadLb: typeof centre === "number" && Number.isFinite(centre) && centre >= 0 ? centre : undefined,
+    longTerm: params.longTerm === true,
+    stiffnessKey: typeof key === "string" && stiffnessOf(key) ? key : undefined,
+  };
 }
 
 const limitIn = (mmValue: number) => (mmValue / 25.4).toFixed(3);

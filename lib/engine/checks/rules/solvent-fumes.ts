@@ -1,6 +1,18 @@
+import type { Part } from "../../fixtures/types";
 import { cautionRule } from "../caution-rule";
 
 const LAMINATE = /laminate|contact cement/i;
+
+/** The test per part: re-derives keep unchanged fixtures' part objects, so re-checks skip the regexes. */
+const memo = new WeakMap<Part, boolean>();
+const calls = (p: Part) => {
+  let v = memo.get(p);
+  if (v === undefined) {
+    v = LAMINATE.test(p.name) || p.joinery.some((j) => LAMINATE.test(j)) || LAMINATE.test(p.materialId);
+    memo.set(p, v);
+  }
+  return v;
+};
 
 /** Advice: ventilate when gluing laminate with solvent contact cement. */
 export const solventFumesRule = cautionRule({
@@ -16,7 +28,7 @@ export const solventFumesRule = cautionRule({
   cautions: ["Open the big door, run a fan blowing out, put out pilot lights and unplug tools; or use a water-based contact cement."],
   applies: (ctx) => {
     const ids = new Set<string>();
-    for (const p of ctx.parts) if (LAMINATE.test(p.name) || p.joinery.some((j) => LAMINATE.test(j)) || LAMINATE.test(p.materialId)) ids.add(p.fixtureId);
+    for (const p of ctx.parts) if (calls(p)) ids.add(p.fixtureId);
     for (const h of ctx.hardware) if (LAMINATE.test(h.name) || LAMINATE.test(h.key)) ids.add(h.fixtureId);
     return [...ids];
   },

@@ -35,7 +35,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const n = ctx.numbers;
   const note = ctx.presetNote("longestStockMm", "stockSupportFraction");
   for (const f of ctx.fixtures) {
-    if (!isMiterStation(f) || (ids && !ids.has(f.id))) continue;
+    if ((ids && !ids.has(f.id)) || !isMiterStation(f)) continue;
     const table = worldWorkSurface(f);
     if (table === undefined) continue;
     for (const side of ["left", "right"] as const) {

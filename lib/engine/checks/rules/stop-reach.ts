@@ -11,7 +11,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const docs = new Map(ctx.plan.fixtures.map((d) => [d.id, d]));
   for (const f of ctx.fixtures) {
-    if (f.kind !== KIND.stopTrack || (ids && !ids.has(f.id))) continue;
+    if ((ids && !ids.has(f.id)) || f.kind !== KIND.stopTrack) continue;
     const parsed = stopTrackParamsSchema.safeParse(docs.get(f.id)?.params ?? {});
     if (!parsed.success) continue;
     const table = stopTable(parsed.data, ctx.plan.settings);

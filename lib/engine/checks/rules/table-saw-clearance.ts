@@ -20,7 +20,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const n = ctx.numbers;
   for (const f of ctx.fixtures) {
-    if (!isTableSaw(f) || (ids && !ids.has(f.id))) continue;
+    if ((ids && !ids.has(f.id)) || !isTableSaw(f)) continue;
     const table = worldWorkSurface(f) ?? f.body.zMax;
     for (const z of f.zones) {
       if (z.purpose === "outfeed-support") {

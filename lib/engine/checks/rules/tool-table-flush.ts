@@ -12,7 +12,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const tol = ctx.numbers.flushToleranceMm;
   for (const f of ctx.fixtures) {
-    if (!isMiterStation(f) || (ids && !ids.has(f.id))) continue;
+    if ((ids && !ids.has(f.id)) || !isMiterStation(f)) continue;
     const table = worldWorkSurface(f);
     if (table === undefined) continue;
     const near = ctx.solids.query(expandBounds(polygonBounds(f.body.polygon), NEIGHBOUR_GAP_MM));

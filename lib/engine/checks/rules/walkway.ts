@@ -28,7 +28,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const n = ctx.numbers;
   const note = ctx.presetNote("walkwayMm", "walkwayMinMm");
   for (const f of ctx.fixtures) {
-    if (!isFloorStanding(f) || (ids && !ids.has(f.id))) continue;
+    if ((ids && !ids.has(f.id)) || !isFloorStanding(f)) continue;
     const strip = frontStrip(f, n.walkwayMm);
     const run = clearRun(ctx, strip, { zLo: 1, zHi: HEAD_HEIGHT_MM, exclude: new Set([f.id]) });
     let clear = run.clearMm;
