@@ -11,6 +11,7 @@ import { buildShoppingList } from "@/lib/engine/shopping/shopping-list";
 import { BoardLayouts } from "./BoardLayouts";
 import { formatters } from "./format";
 import { PartsTable, type PartRow } from "./PartsTable";
+import { PriceListEditor } from "./PriceListEditor";
 import { planParts } from "./plan-parts";
 import { SheetMapsPanel } from "./SheetMapsPanel";
 import { downloadText, ShoppingPanel } from "./ShoppingPanel";
@@ -24,7 +25,7 @@ const TABS = [
 type TabId = (typeof TABS)[number]["id"];
 
 /** The account's prices, or the example list when signed out or not yet saved. */
-function usePrices(): { items: PriceItem[]; mine: boolean } {
+function usePrices(): { items: PriceItem[]; mine: boolean; set: (items: PriceItem[], mine: boolean) => void } {
   const [state, setState] = useState<{ items: PriceItem[]; mine: boolean }>({ items: DEFAULT_PRICE_LIST.items, mine: false });
   useEffect(() => {
     let live = true;
@@ -38,7 +39,7 @@ function usePrices(): { items: PriceItem[]; mine: boolean } {
       live = false;
     };
   }, []);
-  return state;
+  return { ...state, set: (items, mine) => setState({ items, mine }) };
 }
 
 /** Parts list, sheet maps, board plan and shopping list of a plan, in tabs; printing shows them all. */
@@ -98,7 +99,12 @@ export function PartsView({ plan }: { plan: PlanDocument }) {
           {t.id === "parts" && (parts.length ? <PartsTable rows={rows} fmt={fmt} /> : <p className="text-sm text-walnut-500">Add fixtures to the plan to see their parts.</p>)}
           {t.id === "sheets" && <SheetMapsPanel nesting={nesting} kerfMm={plan.settings.kerfMm} fmt={fmt} />}
           {t.id === "boards" && <BoardLayouts plan={boards} fmt={fmt} />}
-          {t.id === "shopping" && <ShoppingPanel list={shopping} allowancePct={allowance} onAllowance={setAllowance} pricesAreMine={prices.mine} />}
+          {t.id === "shopping" && (
+            <div className="flex flex-col gap-4">
+              <ShoppingPanel list={shopping} allowancePct={allowance} onAllowance={setAllowance} pricesAreMine={prices.mine} />
+              <PriceListEditor key={prices.mine ? "mine" : "examples"} items={prices.items} onSaved={prices.set} />
+            </div>
+          )}
         </section>
       ))}
     </div>
