@@ -13,7 +13,7 @@ export function BoardLayouts({ plan, fmt }: { plan: BoardPlan; fmt: Formatters }
         return (
           <section key={`${g.materialId}-${g.thicknessMm}-${g.stockWidthMm}`} className="break-inside-avoid" data-testid="board-group">
             <h3 className="font-semibold text-walnut-900">
-              {g.materialName}, {width} ({fmt.len(g.stockWidthMm)} wide)
+              {g.materialName}, {width} ({fmt.len(g.stockWidthMm)} wide, {fmt.len(g.thicknessMm)} thick)
             </h3>
             <p className="text-sm text-walnut-700">
               {g.boards.length} boards, {fmt.len(g.totalLengthMm)} in all · fewest possible {g.lowerBound} · yield {g.yieldPct.toFixed(0)}%

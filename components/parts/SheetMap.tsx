@@ -101,7 +101,7 @@ export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; ke
 /** The cut order in words, for the saw: "1. Rip the sheet 610 mm from the near edge". */
 export function CutList({ sheet, fmt }: { sheet: SheetLayout; fmt: Formatters }) {
   return (
-    <ol className="mt-2 columns-1 gap-6 text-xs text-walnut-700 sm:columns-2 lg:columns-3">
+    <ol className="mt-2 list-none columns-1 gap-6 text-xs text-walnut-700 sm:columns-2 lg:columns-3">
       {sheet.cuts.map((c) => {
         const rip = c.kind === "rip";
         const width = rip ? c.y1Mm - sheet.usable.yMm : c.x1Mm - sheet.usable.xMm;

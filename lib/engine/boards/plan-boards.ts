@@ -44,9 +44,11 @@ export function planBoards(parts: readonly Part[], materials: readonly Material[
       miss(p, `longer than the longest board after end trim (${(lengths[lengths.length - 1] - 2 * trim).toFixed(1)} mm)`);
       continue;
     }
-    const key = `${p.materialId}|${p.thicknessMm}|${width}`;
+    // Thickness to 0.1 mm so float noise does not split a stock.
+    const thick = Math.round(p.thicknessMm * 10) / 10;
+    const key = `${p.materialId}|${thick}|${width}`;
     let g = groups.get(key);
-    if (!g) groups.set(key, (g = { materialId: p.materialId, thicknessMm: p.thicknessMm, widthMm: width, pieces: [] }));
+    if (!g) groups.set(key, (g = { materialId: p.materialId, thicknessMm: thick, widthMm: width, pieces: [] }));
     for (let i = 0; i < p.qty; i++) g.pieces.push({ key: `${p.id}#${i + 1}`, partId: p.id, name: p.name, lengthMm: p.lengthMm, widthMm: p.widthMm });
   }
   const out: BoardGroup[] = [];
