@@ -106,3 +106,12 @@ describe("planBoards", () => {
     );
   });
 });
+
+describe("planBoards purity", () => {
+  it("does not change its input", () => {
+    const parts = threeCabinetRun();
+    const copy = structuredClone(parts);
+    planBoards(parts, TEST_MATERIALS, { kerfMm: KERF, lengthsMm: [3657.6, 1828.8] });
+    expect(parts).toEqual(copy);
+  });
+});
