@@ -31,8 +31,12 @@ export function PlanSketch({ document, highlight = [], className = "" }: { docum
       <polygon points={room.corners.map(pt).join(" ")} fill="#efe6d4" stroke="#4b3423" strokeWidth={60} strokeLinejoin="round" />
       {room.walls.map((w) => {
         const mid = onWall(w, w.lengthMm / 2, -320);
+        // Along the wall, kept upright (SVG y points down, hence the minus).
+        let deg = (Math.atan2(-w.dir.y, w.dir.x) * 180) / Math.PI;
+        if (deg > 90) deg -= 180;
+        if (deg < -90) deg += 180;
         return (
-          <text key={w.id} x={mid.x} y={-mid.y} fontSize={180} textAnchor="middle" dominantBaseline="middle" fill="#4b3423">
+          <text key={w.id} x={mid.x} y={-mid.y} fontSize={180} textAnchor="middle" dominantBaseline="middle" fill="#4b3423" transform={`rotate(${deg} ${mid.x} ${-mid.y})`}>
             {(w.id && document.room.walls.find((d) => d.id === w.id)?.label) || w.id} · {fmt(w.lengthMm)}
           </text>
         );

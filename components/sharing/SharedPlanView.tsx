@@ -7,12 +7,13 @@ import { PlanSketch } from "./PlanSketch";
 import { PresetNote, type PresetInfo } from "./PresetNote";
 import { RoomView3D } from "./RoomView3D";
 
-const TABS = ["3D", "Plan", "Elevations", "Checks", "Fixtures"] as const;
+const TABS = ["Plan", "3D", "Elevations", "Checks", "Parts", "Fixtures"] as const;
 type Tab = (typeof TABS)[number];
 
 /** A plan shown read-only: views to look at, nothing to change. */
-export function SharedPlanView({ document, preset, children }: { document: PlanDocument; preset: PresetInfo | null; children?: ReactNode }) {
-  const [tab, setTab] = useState<Tab>("3D");
+/** `checks` and `parts` are rendered on the server (the engine runs there) and passed in. */
+export function SharedPlanView({ document, preset, checks, parts }: { document: PlanDocument; preset: PresetInfo | null; checks?: ReactNode; parts?: ReactNode }) {
+  const [tab, setTab] = useState<Tab>("Plan");
   return (
     <div className="flex flex-col gap-3">
       <div role="tablist" aria-label="Views" className="flex flex-wrap gap-1">
@@ -43,9 +44,10 @@ export function SharedPlanView({ document, preset, children }: { document: PlanD
         {tab === "Checks" && (
           <div className="flex flex-col gap-3">
             <PresetNote preset={preset} document={document} />
-            {children ?? <p className="text-sm text-walnut-700">Open the plan in your own account to run the clearance checks live.</p>}
+            {checks}
           </div>
         )}
+        {tab === "Parts" && parts}
         {tab === "Fixtures" && (
           <table className="w-full text-left text-sm">
             <thead>

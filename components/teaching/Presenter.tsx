@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import { useCallback, useEffect, useRef, useState } from "react";
+import type { Finding } from "@/lib/engine/checks/types";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { StepStage } from "./StepStage";
 import { stepForKey, type Step } from "./steps";
@@ -13,10 +14,12 @@ interface Props {
   steps: Step[];
   document: PlanDocument;
   presetName: string | null;
+  /** The plan's findings (server-computed), so a step can show what its rule says about this plan. */
+  findings: Finding[];
 }
 
 /** Full-screen presentation: one step at a time, arrow keys or buttons to move, F for full screen. */
-export function Presenter({ title, planName, ownerName, steps, document, presetName }: Props) {
+export function Presenter({ title, planName, ownerName, steps, document, presetName, findings }: Props) {
   const [i, setI] = useState(0);
   const root = useRef<HTMLDivElement>(null);
   const count = steps.length;
@@ -62,6 +65,18 @@ export function Presenter({ title, planName, ownerName, steps, document, presetN
           <aside className="flex flex-col gap-3 overflow-auto border-l border-walnut-100 bg-paper-deep p-4">
             <h1 className="text-xl font-semibold text-walnut-900" data-testid="step-title">{step.title}</h1>
             {step.note && <p className="whitespace-pre-line text-walnut-900">{step.note}</p>}
+            {step.ruleId && (
+              <ul className="flex flex-col gap-1 text-sm" data-testid="step-findings">
+                {findings
+                  .filter((f) => f.ruleId === step.ruleId)
+                  .slice(0, 4)
+                  .map((f, k) => (
+                    <li key={k} className={`rounded border-l-4 bg-white px-2 py-1 ${f.pass ? "border-pine-500" : f.severity === "conflict" ? "border-brick-500" : "border-amberline-500"}`}>
+                      {f.message}
+                    </li>
+                  ))}
+              </ul>
+            )}
             {step.ruleId && (
               <Link className="text-sm underline" href={`/rules/${step.ruleId}`} target="_blank">
                 The rule behind this step: {step.ruleId}

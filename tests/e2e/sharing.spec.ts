@@ -22,7 +22,7 @@ test("owner shares a read-only link; a visitor opens it, signs up and copies it;
   const plan = await op.request.post("/api/v1/plans", {
     data: {
       name: "Tandem garage shop",
-      document: { schemaVersion: 1, room: { walls: [{ id: "w1", label: "Door wall", lengthMm: 6100 }, { id: "w2", label: "Side wall", lengthMm: 7300 }, { id: "w3", label: "Back wall", lengthMm: 6100 }, { id: "w4", label: "House wall", lengthMm: 7300 }] } },
+      document: { schemaVersion: 1, room: { walls: [{ id: "w1", label: "Door wall", lengthMm: 6100 }, { id: "w2", label: "Side wall", lengthMm: 7300 }, { id: "w3", label: "Back wall", lengthMm: 6100 }, { id: "w4", label: "House wall", lengthMm: 7300 }] }, fixtures: [{ id: "run-1", kind: "base-cabinet", label: "Drawer run", placement: { mode: "wall", wallId: "w2", offsetMm: 900, elevationMm: 0 }, params: {} }] },
     },
   });
   const planId = (await plan.json()).plan.id as string;
@@ -48,6 +48,11 @@ test("owner shares a read-only link; a visitor opens it, signs up and copies it;
   await vp.getByRole("tab", { name: "Plan" }).click();
   await expect(vp.getByRole("img", { name: "Floor plan of the room" })).toBeVisible();
   await expect(vp.getByText(/Side wall/)).toBeVisible();
+  // The checks and the parts list come from the same engine as the editor.
+  await vp.getByRole("tab", { name: "Checks" }).click();
+  await expect(vp.getByTestId("findings-summary")).toContainText(/\d+ checks? met/);
+  await vp.getByRole("tab", { name: "Parts" }).click();
+  expect(await vp.getByTestId("parts-table").locator("tbody tr").count()).toBeGreaterThan(3);
   // Nothing to edit: no text fields, no save.
   await expect(vp.getByRole("textbox")).toHaveCount(0);
   await expect(vp.getByRole("button", { name: /save/i })).toHaveCount(0);

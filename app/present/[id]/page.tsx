@@ -5,6 +5,7 @@ import type { Step } from "@/components/teaching/steps";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
 import { currentUser } from "@/lib/server/session";
+import { analyseForReading } from "@/lib/server/services/shared-analysis";
 import { showWalkthrough, type WalkthroughShow } from "@/lib/server/services/walkthroughs";
 
 export const metadata: Metadata = { title: "Presentation", robots: { index: false, follow: false } };
@@ -24,5 +25,6 @@ export default async function PresentPage({ params, searchParams }: Props) {
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;
   }
-  return <Presenter title={w.title} planName={w.planName} ownerName={w.ownerName} steps={w.steps as Step[]} document={w.document} presetName={w.preset?.name ?? null} />;
+  const { findings } = analyseForReading(w.document, w.preset ? { name: w.preset.name, numbers: w.preset.numbers } : null);
+  return <Presenter title={w.title} planName={w.planName} ownerName={w.ownerName} steps={w.steps as Step[]} document={w.document} presetName={w.preset?.name ?? null} findings={findings} />;
 }

@@ -1,10 +1,13 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { ReadOnlyFindings } from "@/components/sharing/ReadOnlyFindings";
+import { ReadOnlyParts } from "@/components/sharing/ReadOnlyParts";
 import { CopyPlanButton } from "@/components/sharing/CopyPlanButton";
 import { SharedPlanView } from "@/components/sharing/SharedPlanView";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
 import { presetOfDocument } from "@/lib/server/services/plan-preset";
+import { analyseForReading } from "@/lib/server/services/shared-analysis";
 import { openShared, type SharedPlan } from "@/lib/server/services/share-links";
 import { sessionUser } from "@/lib/server/viewer";
 
@@ -26,6 +29,7 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
   }
   const preset = await presetOfDocument(em, plan.document);
   const user = await sessionUser();
+  const analysis = analyseForReading(plan.document, preset ? { name: preset.name, numbers: preset.numbers } : null);
   return (
     <div className="mx-auto flex max-w-6xl flex-col gap-4 px-4 py-6">
       <header className="flex flex-wrap items-end justify-between gap-3">
@@ -41,7 +45,12 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
       <p className="rounded-md bg-steel-100 px-3 py-2 text-sm text-steel-700" data-testid="read-only-note">
         You are looking at a read-only copy. Nothing here can be changed; copy it into your own account to work on it.
       </p>
-      <SharedPlanView document={plan.document} preset={preset ? { name: preset.name, ownerName: preset.ownerName, numbers: preset.numbers as Record<string, number> } : null} />
+      <SharedPlanView
+        document={plan.document}
+        preset={preset ? { name: preset.name, ownerName: preset.ownerName, numbers: preset.numbers as Record<string, number> } : null}
+        checks={analysis.error ? <p className="text-sm text-brick-700">{analysis.error}</p> : <ReadOnlyFindings findings={analysis.findings} />}
+        parts={<ReadOnlyParts parts={analysis.parts} document={plan.document} />}
+      />
     </div>
   );
 }

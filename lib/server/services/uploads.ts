@@ -8,6 +8,7 @@ import type { AppError} from "../errors";
 import { invalid, notFound } from "../errors";
 import { accessPlan } from "../policy";
 import { deleteObject, objectSize, presignGet, presignPut, readObject, writeObject } from "../storage";
+import { mmPerPx } from "./photo-scale";
 import { ACCEPTED_TYPES, MAX_UPLOAD_BYTES, reencode, sniffImageType } from "./image-check";
 
 /** Photos a plan may hold (each wall a few). */
@@ -40,11 +41,6 @@ export interface PhotoView {
   /** A short-lived link to the cleaned copy (ready photos only). */
   url: string | null;
   createdAt: string;
-}
-
-/** mm per pixel of the clean copy from two marked points a known distance apart. */
-export function mmPerPx(s: { ax: number; ay: number; bx: number; by: number; distanceMm: number }): number {
-  return s.distanceMm / Math.hypot(s.bx - s.ax, s.by - s.ay);
 }
 
 async function view(p: WallPhoto): Promise<PhotoView> {
