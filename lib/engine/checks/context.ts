@@ -53,8 +53,16 @@ export interface CheckContext extends Derived {
   presetNote(...keys: (keyof RuleNumbers)[]): string;
 }
 
+const SOLIDS = new WeakMap<PlacedFixture, SolidItem>();
+
+/** The index entry for a fixture's body (one per placed fixture object: unchanged fixtures keep theirs across re-derives). */
 export function fixtureSolid(f: PlacedFixture): SolidItem {
-  return { id: f.id, source: "fixture", kind: f.kind, label: f.label || f.kind, prism: f.body, bounds: polygonBounds(f.body.polygon), fixture: f };
+  let s = SOLIDS.get(f);
+  if (!s) {
+    s = { id: f.id, source: "fixture", kind: f.kind, label: f.label || f.kind, prism: f.body, bounds: polygonBounds(f.body.polygon), fixture: f };
+    SOLIDS.set(f, s);
+  }
+  return s;
 }
 
 export function obstacleSolid(o: PlacedObstacle): SolidItem {

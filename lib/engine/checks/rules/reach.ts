@@ -1,7 +1,7 @@
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { convexPenetration, polygonBounds } from "../geom/polygon";
-import { hasShelves, isCounter } from "../kinds";
+import { fixtureInfo, hasShelves, isCounter } from "../kinds";
 import type { Finding, Rule } from "../types";
 
 const ID = "reach";
@@ -12,9 +12,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const note = ctx.presetNote("reachMaxMm", "reachOverObstructionMm");
   for (const f of ctx.fixtures) {
     if ((ids && !ids.has(f.id)) || !hasShelves(f)) continue;
-    let shelfTop = -Infinity;
-    for (const b of f.boxes) if (b.role === "shelf" && b.z + b.h > shelfTop) shelfTop = b.z + b.h;
-    const top = shelfTop > -Infinity ? f.origin.z + shelfTop : f.body.zMax;
+    const shelfTop = fixtureInfo(f).shelfTopMm;
+    const top = shelfTop !== undefined ? f.origin.z + shelfTop : f.body.zMax;
     // Reaching over a counter deeper than 20 in lowers the limit.
     let over: string | undefined;
     for (const s of ctx.solids.query(polygonBounds(f.body.polygon))) {
