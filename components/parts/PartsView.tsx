@@ -10,6 +10,8 @@ import type { PriceItem } from "@/lib/engine/shopping/price-schema";
 import { buildShoppingList } from "@/lib/engine/shopping/shopping-list";
 import { BoardLayouts } from "./BoardLayouts";
 import { formatters } from "./format";
+import type { OffcutInput } from "@/lib/engine/nesting/types";
+import { OffcutsForm } from "./OffcutsForm";
 import { PartsTable, type PartRow } from "./PartsTable";
 import { PriceListEditor } from "./PriceListEditor";
 import { planParts } from "./plan-parts";
@@ -53,7 +55,8 @@ export function PartsView({ plan }: { plan: PlanDocument }) {
     const names = new Map(plan.materials.map((m) => [m.id, m.name]));
     return parts.map((p) => ({ ...p, fixtureLabel: labels.get(p.fixtureId) ?? p.fixtureId, materialName: names.get(p.materialId) ?? p.materialId }));
   }, [parts, plan.fixtures, plan.materials]);
-  const nestOptions = useMemo(() => ({ kerfMm: plan.settings.kerfMm, timeBudgetMs: 800 }), [plan.settings.kerfMm]);
+  const [offcuts, setOffcuts] = useState<OffcutInput[]>([]);
+  const nestOptions = useMemo(() => ({ kerfMm: plan.settings.kerfMm, timeBudgetMs: 800, offcuts }), [plan.settings.kerfMm, offcuts]);
   const nesting = useNesting(parts, plan.materials, nestOptions);
   const boards = useMemo(() => planBoards(parts, plan.materials, { kerfMm: plan.settings.kerfMm }), [parts, plan.materials, plan.settings.kerfMm]);
   const prices = usePrices();
@@ -97,7 +100,12 @@ export function PartsView({ plan }: { plan: PlanDocument }) {
         >
           <h2 className="mb-2 hidden text-lg font-semibold print:block">{t.label}</h2>
           {t.id === "parts" && (parts.length ? <PartsTable rows={rows} fmt={fmt} /> : <p className="text-sm text-walnut-500">Add fixtures to the plan to see their parts.</p>)}
-          {t.id === "sheets" && <SheetMapsPanel nesting={nesting} kerfMm={plan.settings.kerfMm} fmt={fmt} />}
+          {t.id === "sheets" && (
+            <div className="flex flex-col gap-4">
+              <OffcutsForm offcuts={offcuts} onChange={setOffcuts} materials={plan.materials} settings={plan.settings} fmt={fmt} />
+              <SheetMapsPanel nesting={nesting} kerfMm={plan.settings.kerfMm} fmt={fmt} />
+            </div>
+          )}
           {t.id === "boards" && <BoardLayouts plan={boards} fmt={fmt} />}
           {t.id === "shopping" && (
             <div className="flex flex-col gap-4">
