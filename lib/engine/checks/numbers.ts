@@ -1,5 +1,5 @@
 import type { PlanDocument } from "../plan/schema";
-import { estimateElbowHeightMm } from "./elbow";
+import { estimateElbowHeightMm } from "../ergonomics/elbow";
 
 /**
  * Every number a rule compares against, in mm unless the name says otherwise. An instructor's

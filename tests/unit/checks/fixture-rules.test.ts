@@ -130,6 +130,15 @@ describe("shelf sag against 0.02 in per foot (practice)", () => {
     expect(f.pass).toBe(false);
     expect(f.measured! / 25.4).toBeCloseTo(0.0743, 3);
   });
+  it("a shelf run's own load: 60 lb at the centre of the red oak shelf gives 0.0810 in, over 0.06 in", () => {
+    const plan = makePlan(5000, 5000, {
+      fixtures: [{ id: "sr", kind: "shelf-run", placement: { mode: "free", xMm: 0, yMm: 0 }, params: { loadLbPerFt: 0, centreLoadLb: 60, longTerm: false, stiffnessKey: "northern-red-oak" } }],
+    });
+    const sr = fixture("sr", { kind: "shelf-run", x: 0, y: 0, w: 36 * IN, d: 300, h: 1800 });
+    const f = evaluatePlan(plan, derive(plan, room, [sr], [], [shelf("ply-18")])).find((x) => x.ruleId === "shelf-sag")!;
+    expect(f.measured! / 25.4).toBeCloseTo(0.081, 3);
+    expect(f.pass).toBe(false);
+  });
   it("a preset limit of 0.016 in/ft fails the oak shelf and says so", () => {
     const f = run("red-oak-19", { sagLimitMmPerM: (0.016 * 25.4) / 0.3048 });
     expect(f.pass).toBe(false);

@@ -9,7 +9,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const n = ctx.numbers;
   const elbow = n.elbowHeightMm;
-  const note = ctx.presetNote("elbowHeightMm", "lightWorkBelowElbowMinMm", "lightWorkBelowElbowMaxMm", "heavyWorkBelowElbowMaxMm");
+  const estimated = ctx.plan.settings.elbowHeightMm === undefined && !ctx.presetSet.has("elbowHeightMm");
+  const note = ctx.presetNote("elbowHeightMm", "lightWorkBelowElbowMinMm", "lightWorkBelowElbowMaxMm", "heavyWorkBelowElbowMaxMm") + (estimated ? " (elbow height estimated from your stature)" : "");
   for (const f of ctx.fixtures) {
     if ((ids && !ids.has(f.id)) || !isCounter(f)) continue;
     const top = worldWorkSurface(f)!;

@@ -14,7 +14,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     if ((ids && !ids.has(f.id)) || f.kind !== KIND.stopTrack) continue;
     const parsed = stopTrackParamsSchema.safeParse(docs.get(f.id)?.params ?? {});
     if (!parsed.success) continue;
-    const table = stopTable(parsed.data, ctx.plan.settings);
+    // The kerf in force (a preset may set it) decides where the kerf edge falls on the track side.
+    const table = stopTable(parsed.data, { ...ctx.plan.settings, kerfMm: ctx.numbers.kerfMm });
     for (const row of table.rows) {
       const cut = row.cutLengthMm;
       const over = cut > table.maxCutMm ? cut - table.maxCutMm : 0;
