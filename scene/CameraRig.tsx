@@ -33,7 +33,7 @@ export function CameraRig() {
       {view === "orbit" ? <PerspectiveCamera key="orbit" makeDefault up={[0, 0, 1]} fov={45} near={0.05} far={400} position={[-5, -8, 6]} /> : null}
       {view === "plan" ? <OrthographicCamera key="plan" makeDefault up={[0, 1, 0]} near={0.1} far={200} position={[0, 0, 50]} /> : null}
       {view === "elevation" ? <OrthographicCamera key={`elev-${wallId}`} makeDefault up={[0, 0, 1]} near={0.05} far={200} /> : null}
-      <OrbitControls key={view} makeDefault enableRotate={view === "orbit"} enableDamping={false} screenSpacePanning />
+      <OrbitControls key={`controls-${view}`} makeDefault enableRotate={view === "orbit"} enableDamping={false} screenSpacePanning />
     </>
   );
 }

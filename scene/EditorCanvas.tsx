@@ -10,6 +10,7 @@ import { Ghost, TapeLine } from "./GhostAndTape";
 import { PointerBridge } from "./PointerBridge";
 import { RoomLayer } from "./RoomLayer";
 import { SelectionOutline } from "./SelectionOutline";
+import { TestHooks } from "./TestHooks";
 import { M } from "./units";
 import { ZonesLayer } from "./ZonesLayer";
 
@@ -49,6 +50,7 @@ export default function EditorCanvas({ editor, label }: { editor: Editor; label:
         </group>
         <PointerBridge />
         <FrameCounter />
+        <TestHooks />
       </EditorProvider>
     </Canvas>
   );

@@ -1,12 +1,48 @@
 "use client";
-import { memo, useMemo } from "react";
-import { Shape } from "three";
+import { useFrame } from "@react-three/fiber";
+import { memo, useMemo, useRef } from "react";
+import { Shape, type Group } from "three";
 import type { Opening } from "@/lib/engine/plan/schema";
 import type { SolvedRoom, SolvedWall } from "@/lib/engine/room/types";
 import { useDerived, useDoc } from "@/lib/client/react/useEditorState";
 import { prismGeometry } from "./prism";
 
 const WALL_THICKNESS_MM = 100;
+
+/**
+ * Hides the walls between the camera and the room (their inner face looks away from the camera) so
+ * the 3D view sees in; plan and elevation views keep every wall.
+ */
+function Cutaway({ walls, children }: { walls: readonly SolvedWall[]; children: (wall: SolvedWall) => React.ReactNode }) {
+  const groups = useRef(new Map<string, Group>());
+  useFrame(({ camera }) => {
+    for (const w of walls) {
+      const g = groups.current.get(w.id);
+      if (!g) continue;
+      // Camera position is in metres; the wall in mm.
+      const dx = camera.position.x * 1000 - w.start.x;
+      const dy = camera.position.y * 1000 - w.start.y;
+      const outside = dx * w.inward.x + dy * w.inward.y < 0;
+      const fromAbove = camera.up.z === 0;
+      g.visible = fromAbove || !outside;
+    }
+  });
+  return (
+    <>
+      {walls.map((w) => (
+        <group
+          key={w.id}
+          ref={(g) => {
+            if (g) groups.current.set(w.id, g);
+            else groups.current.delete(w.id);
+          }}
+        >
+          {children(w)}
+        </group>
+      ))}
+    </>
+  );
+}
 
 function WallMesh({ wall, heightMm }: { wall: SolvedWall; heightMm: number }) {
   // Walls stand outside the floor polygon so fixtures' backs sit on the inner face.
@@ -30,7 +66,7 @@ function OpeningMesh({ opening, wall }: { opening: Opening; wall: SolvedWall }) 
   return (
     <mesh position={[x, y, bottom + opening.heightMm / 2]} rotation={[0, 0, Math.atan2(wall.dir.y, wall.dir.x)]} userData={{ pick: "wall", wallId: wall.id }}>
       <boxGeometry args={[opening.widthMm, WALL_THICKNESS_MM * 1.2, opening.heightMm]} />
-      <meshStandardMaterial color={openingColour[opening.kind]} transparent opacity={0.8} />
+      <meshStandardMaterial color={openingColour[opening.kind]} transparent opacity={0.55} depthWrite={false} />
     </mesh>
   );
 }
@@ -60,13 +96,18 @@ export function RoomLayer() {
   return (
     <group name="room">
       <Floor room={room} />
-      {room.walls.map((w) => (
-        <WallMesh key={w.id} wall={w} heightMm={room.ceilingHeightMm} />
-      ))}
-      {openings.map((o) => {
-        const w = wallById.get(o.wallId);
-        return w ? <OpeningMesh key={o.id} opening={o} wall={w} /> : null;
-      })}
+      <Cutaway walls={room.walls}>
+        {(w) => (
+          <>
+            <WallMesh wall={w} heightMm={room.ceilingHeightMm} />
+            {openings
+              .filter((o) => o.wallId === w.id)
+              .map((o) => (
+                <OpeningMesh key={o.id} opening={o} wall={wallById.get(o.wallId)!} />
+              ))}
+          </>
+        )}
+      </Cutaway>
       {obstacles?.map((o) => (
         <mesh key={o.id} geometry={prismGeometry(o.body)} userData={{ pick: "obstacle", id: o.id }}>
           <meshStandardMaterial color={o.kind === "panel" ? "#36414e" : "#7a8794"} transparent opacity={o.kind === "parking-bay" ? 0.25 : 0.9} />

@@ -6,11 +6,11 @@ import { useDerived, useUi } from "@/lib/client/react/useEditorState";
 import { prismGeometry } from "./prism";
 import { zoneMaterial, zoneStates, zoneStyle, type ZoneState } from "./zone-style";
 
-const ZoneMesh = memo(function ZoneMesh({ zone, state, labelled }: { zone: WorldZone; state: ZoneState; labelled: boolean }) {
+const ZoneMesh = memo(function ZoneMesh({ zone, state, labelled, faint }: { zone: WorldZone; state: ZoneState; labelled: boolean; faint: boolean }) {
   const geometry = prismGeometry(zone.prism);
   const c = zone.prism.polygon.reduce((a, v) => ({ x: a.x + v.x / zone.prism.polygon.length, y: a.y + v.y / zone.prism.polygon.length }), { x: 0, y: 0 });
   return (
-    <mesh geometry={geometry} material={zoneMaterial(state)} raycast={() => null} renderOrder={2}>
+    <mesh geometry={geometry} material={zoneMaterial(state, faint)} raycast={() => null} renderOrder={2}>
       {labelled ? (
         <Html position={[c.x, c.y, zone.prism.zMax]} center zIndexRange={[20, 10]} className="pointer-events-none">
           <span className="whitespace-nowrap rounded bg-white/90 px-1 text-[11px] font-medium text-walnut-900 shadow">
@@ -43,7 +43,8 @@ export function ZonesLayer() {
         const roomZone = !fixtureIds.has(z.ownerId);
         if (!showAll && state === "clear" && !roomZone && !selected.has(z.ownerId)) return null;
         const labelled = state !== "clear" && labels++ < 8;
-        return <ZoneMesh key={z.id} zone={z} state={state} labelled={labelled} />;
+        // The room's own clear zones (parking bay, door track) are large: drawn faint so fixtures stay visible.
+        return <ZoneMesh key={z.id} zone={z} state={state} labelled={labelled} faint={roomZone && state === "clear" && !showAll} />;
       })}
     </group>
   );

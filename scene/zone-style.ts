@@ -1,25 +1,6 @@
+export { zoneStates, zoneStyle, type ZoneState } from "./zone-states";
 import { CanvasTexture, Color, DoubleSide, MeshBasicMaterial, RepeatWrapping } from "three";
-import type { Finding } from "@/lib/engine/checks/types";
-
-export type ZoneState = "conflict" | "caution" | "clear";
-
-/** Colour and pattern per state: the pattern and the label carry the meaning without colour. */
-export const zoneStyle: Record<ZoneState, { colour: string; pattern: "hatch" | "dots" | "plain"; label: string }> = {
-  conflict: { colour: "#b5432c", pattern: "hatch", label: "Conflict" },
-  caution: { colour: "#d99a1e", pattern: "dots", label: "Caution" },
-  clear: { colour: "#2f7d4f", pattern: "plain", label: "Clear" },
-};
-
-/** Each zone's state from the failing findings that name it. */
-export function zoneStates(findings: readonly Finding[]): Map<string, ZoneState> {
-  const out = new Map<string, ZoneState>();
-  for (const f of findings) {
-    if (f.pass) continue;
-    const st: ZoneState = f.severity === "conflict" ? "conflict" : "caution";
-    for (const z of f.zoneIds) if (out.get(z) !== "conflict") out.set(z, st);
-  }
-  return out;
-}
+import { zoneStyle, type ZoneState } from "./zone-states";
 
 function patternTexture(kind: "hatch" | "dots"): CanvasTexture | null {
   if (typeof document === "undefined") return null;
@@ -51,16 +32,17 @@ function patternTexture(kind: "hatch" | "dots"): CanvasTexture | null {
   return t;
 }
 
-const materials = new Map<ZoneState, MeshBasicMaterial>();
+const materials = new Map<string, MeshBasicMaterial>();
 
-/** One translucent material per state, patterned for conflict and caution. */
-export function zoneMaterial(state: ZoneState): MeshBasicMaterial {
-  let m = materials.get(state);
+/** One translucent material per state (and a faint one for large clear room zones), patterned for conflict and caution. */
+export function zoneMaterial(state: ZoneState, faint = false): MeshBasicMaterial {
+  const key = `${state}:${faint}`;
+  let m = materials.get(key);
   if (!m) {
     const st = zoneStyle[state];
     const map = st.pattern === "plain" ? null : patternTexture(st.pattern);
-    m = new MeshBasicMaterial({ color: new Color(st.colour), transparent: true, opacity: state === "clear" ? 0.18 : 0.4, depthWrite: false, side: DoubleSide, map });
-    materials.set(state, m);
+    m = new MeshBasicMaterial({ color: new Color(st.colour), transparent: true, opacity: faint ? 0.06 : state === "clear" ? 0.18 : 0.4, depthWrite: false, side: DoubleSide, map });
+    materials.set(key, m);
   }
   return m;
 }

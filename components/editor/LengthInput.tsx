@@ -33,7 +33,7 @@ export function LengthInput({ label, valueMm, onCommit, onClear, placeholder, te
   const commit = () => {
     if (text === null) return;
     if (text.trim() === "" && onClear) onClear();
-    else if (read?.ok && Math.abs(read.mm - (valueMm ?? NaN)) > 1e-6) onCommit(read.mm);
+    else if (read?.ok && (valueMm == null || Math.abs(read.mm - valueMm) > 1e-6)) onCommit(read.mm);
     if (!read || read.ok) setText(null);
   };
 

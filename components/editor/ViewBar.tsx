@@ -28,8 +28,8 @@ export function ViewBar() {
       </div>
       {view === "elevation" ? (
         <label className="flex items-center gap-1 text-xs">
-          Wall
-          <select className="rounded border border-walnut-300 bg-white px-1 py-0.5" value={wallId ?? walls[0]?.id} onChange={(e) => ed.ui.setState({ elevationWallId: e.target.value })}>
+          <span aria-hidden="true">Wall</span>
+          <select aria-label="Elevation wall" className="rounded border border-walnut-300 bg-white px-1 py-0.5" value={wallId ?? walls[0]?.id} onChange={(e) => ed.ui.setState({ elevationWallId: e.target.value })}>
             {walls.map((w, i) => (
               <option key={w.id} value={w.id}>
                 {i + 1}

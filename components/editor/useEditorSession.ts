@@ -26,6 +26,7 @@ export function useEditorSession(plan: PlanInit) {
 
   useEffect(() => {
     const { editor, saver } = session;
+    saver.start();
     const readOnly = plan.role === "viewer";
     const unsub = readOnly ? () => undefined : editor.history.store.subscribe(() => saver.notifyEdit());
     void saver.checkRestore();

@@ -161,6 +161,11 @@ export class Autosave {
     return accept ? copy.doc : null;
   }
 
+  /** (Re)starts scheduling after dispose (React may mount an effect twice in development). */
+  start(): void {
+    this.disposed = false;
+  }
+
   dispose(): void {
     this.disposed = true;
     if (this.timer) clearTimeout(this.timer);

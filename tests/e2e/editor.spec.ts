@@ -1,0 +1,149 @@
+import { test, expect, type Page } from "@playwright/test";
+import { randomUUID } from "node:crypto";
+
+/*
+ * The room editor end to end: a room typed as measured, a base run with a miter-saw tool shelf,
+ * the flush check passing, failing and passing again, a drag into the panel's working space and
+ * its undo, and the plan surviving a reload. Demo account from the seed (README).
+ */
+
+type Ed = {
+  doc: { fixtures: { id: string; kind: string; placement: { mode: string; offsetMm?: number } }[]; room: { walls: { lengthMm: number }[] } };
+  placed(id: string): { body: { polygon: { x: number; y: number }[]; zMax: number } } | undefined;
+  derived: { getState(): { derived: { zones: { ownerId: string; purpose: string; prism: { polygon: { x: number; y: number }[] } }[] } } };
+};
+declare global {
+  interface Window {
+    __bwEditor?: Ed;
+  }
+}
+
+async function signIn(page: Page) {
+  await page.goto("/signin");
+  await page.getByLabel("E-mail").fill("robin@demo.benchwright.test");
+  await page.getByLabel("Password").fill("sawdust-and-pine-42");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/plans$/, { timeout: 60_000 });
+}
+
+async function typeLength(page: Page, testId: string, text: string) {
+  const input = page.getByTestId(testId);
+  await input.click();
+  await input.fill(text);
+  await input.press("Enter");
+}
+
+const flushFindings = (page: Page) => page.locator('#panel-checks [data-testid=finding][data-rule="table-flush"]');
+
+/** Lets the on-demand canvas draw after a view change (it draws only when something changed). */
+async function drawn(page: Page) {
+  await expect.poll(() => page.evaluate(() => window.__bwFrames ?? 0)).toBeGreaterThan(2);
+  await page.waitForTimeout(700);
+}
+
+test("enter a room, build a saw station with live checks, drag into the panel space, undo, reload", async ({ page }) => {
+  test.setTimeout(240_000);
+  await signIn(page);
+  const name = `Editor run ${randomUUID().slice(0, 6)}`;
+  await page.getByLabel("New plan").fill(name);
+  await page.getByRole("button", { name: "Create plan" }).click();
+  await expect(page).toHaveURL(/\/plans\/[0-9a-f-]{36}$/);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText(name);
+  await expect(page.getByTestId("plan-canvas").locator("canvas")).toBeVisible();
+  await expect.poll(() => page.evaluate(() => window.__bwFrames ?? 0), { timeout: 30_000 }).toBeGreaterThan(2);
+
+  // 1. The room as measured: 20' by 22' with one diagonal, typed the way a tape reads.
+  await page.getByRole("tab", { name: "Room" }).click();
+  const w1 = page.getByTestId("wall-length-1");
+  await w1.fill("20' 0 1/4");
+  await expect(page.getByText('Reads as 240 1/4" (6102.4 mm)')).toBeVisible();
+  await w1.press("Enter");
+  await typeLength(page, "wall-length-2", "22'");
+  await typeLength(page, "wall-length-3", "240 1/4");
+  await typeLength(page, "wall-length-4", "264");
+  // Diagonal A to C of a 240.25 x 264 in rectangle is 356.95 in; 357 1/2 makes it out of square.
+  await typeLength(page, "diagonal-AC", "357 1/2");
+  await expect(page.getByTestId("squareness")).toContainText("solved from the diagonals");
+  // 240 1/4 in = 6102.35 mm; 22 ft = 264 in = 6705.6 mm (1 in = 25.4 mm exactly, NIST SP 811).
+  await expect.poll(() => page.evaluate(() => window.__bwEditor!.doc.room.walls.map((w) => Math.round(w.lengthMm * 100)))).toEqual([610235, 670560, 610235, 670560]);
+  // An electrical panel on the back wall (wall 3), 10 ft from its start.
+  await page.getByRole("button", { name: "Add electrical panel" }).click();
+  const panel = page.locator("details").filter({ hasText: "Electrical panel" });
+  await panel.getByLabel("Where").selectOption({ label: "Wall 3 (Back wall)" });
+  await panel.getByLabel("From wall start").fill("120");
+  await panel.getByLabel("From wall start").press("Enter");
+
+  // 2. A base run on the back wall: cabinet, miter-saw tool shelf, cabinet, each placed at the next free spot.
+  await page.getByRole("tab", { name: "Layout" }).click();
+  await page.getByLabel("Wall", { exact: true }).selectOption({ label: "Wall 3 (Back wall)" });
+  for (const kind of ["Base cabinet", "Tool shelf", "Base cabinet"]) {
+    await page.getByLabel("Fixture", { exact: true }).selectOption({ label: kind });
+    await page.getByRole("button", { name: "Add", exact: true }).click();
+  }
+  await expect(page.getByTestId("outline-item")).toHaveCount(3);
+
+  // 3. Checks: the saw table is flush with the counters on both sides (shelf top = counter - table height).
+  await page.getByRole("tab", { name: /Checks/ }).click();
+  await expect(flushFindings(page)).toHaveCount(2);
+  await expect(flushFindings(page).and(page.locator("[data-pass=true]"))).toHaveCount(2);
+
+  // Raise the right-hand cabinet by an inch: flush fails; put it back: flush passes.
+  await page.getByRole("tab", { name: "Layout" }).click();
+  await page.getByTestId("outline-item").nth(2).click();
+  await typeLength(page, "param-carcassHeightMm", "35 1/2");
+  await page.getByRole("tab", { name: /Checks/ }).click();
+  await expect(flushFindings(page).and(page.locator("[data-pass=false]"))).toHaveCount(2);
+  await expect(flushFindings(page).first()).toContainText("Adjust the shelf height");
+  await typeLength(page, "param-carcassHeightMm", "34 1/2");
+  await expect(flushFindings(page).and(page.locator("[data-pass=true]"))).toHaveCount(2);
+
+  // 4. Views: 3D, plan from above with dimensions, back wall in elevation.
+  await page.keyboard.press("Escape");
+  await page.getByRole("button", { name: "3D", exact: true }).click();
+  await drawn(page);
+  await page.screenshot({ path: "tests/artifacts/editor-3d.png" });
+  await page.getByRole("button", { name: "Elevation", exact: true }).click();
+  await page.getByLabel("Elevation wall").selectOption({ index: 2 });
+  await drawn(page);
+  await page.screenshot({ path: "tests/artifacts/editor-elevation.png" });
+  await page.getByRole("button", { name: "Plan", exact: true }).click();
+  await expect(page.getByTestId("dim-wall-1")).toContainText('240 1/4"');
+  await drawn(page);
+  await page.screenshot({ path: "tests/artifacts/editor-plan.png" });
+
+  // 5. Drag the right-hand cabinet along the wall into the panel's working space: a conflict.
+  const ids = await page.evaluate(() => window.__bwEditor!.doc.fixtures.map((f) => f.id));
+  const right = ids[2];
+  const from = await page.evaluate((id) => {
+    const b = window.__bwEditor!.placed(id)!.body;
+    const c = b.polygon.reduce((a, p) => ({ x: a.x + p.x / b.polygon.length, y: a.y + p.y / b.polygon.length }), { x: 0, y: 0 });
+    return window.__bwScreen!({ x: c.x, y: c.y, z: b.zMax });
+  }, right);
+  const to = await page.evaluate(() => {
+    const z = window.__bwEditor!.derived.getState().derived.zones.find((x) => x.purpose.includes("working"))!;
+    const c = z.prism.polygon.reduce((a, p) => ({ x: a.x + p.x / z.prism.polygon.length, y: a.y + p.y / z.prism.polygon.length }), { x: 0, y: 0 });
+    return window.__bwScreen!({ x: c.x, y: c.y, z: 0 });
+  });
+  const conflicts = page.locator('#panel-checks [data-testid=finding][data-rule="panel-working-space"][data-pass=false]');
+  await expect(conflicts).toHaveCount(0);
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  for (let i = 1; i <= 12; i++) await page.mouse.move(from.x + ((to.x - from.x) * i) / 12, from.y + ((to.y - from.y) * i) / 12);
+  await page.mouse.up();
+  await expect(conflicts.first()).toBeVisible();
+  await page.screenshot({ path: "tests/artifacts/editor-panel-conflict.png" });
+
+  // 6. Undo puts it back in one step.
+  await page.keyboard.press("Control+z");
+  await expect(conflicts).toHaveCount(0);
+  const afterUndo = await page.evaluate((id) => window.__bwEditor!.doc.fixtures.find((f) => f.id === id)!.placement.offsetMm, right);
+
+  // 7. Saved: reload and find the same plan.
+  await expect(page.getByTestId("save-status")).toHaveAttribute("data-state", "saved", { timeout: 20_000 });
+  await page.reload();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText(name);
+  await expect.poll(() => page.evaluate(() => window.__bwEditor?.doc.fixtures.length ?? 0)).toBe(3);
+  const reloaded = await page.evaluate((id) => window.__bwEditor!.doc.fixtures.find((f) => f.id === id)!.placement.offsetMm, right);
+  expect(reloaded).toBeCloseTo(afterUndo!, 6);
+  await expect.poll(() => page.evaluate(() => window.__bwEditor!.doc.room.walls[0].lengthMm)).toBeCloseTo(6102.35, 1);
+});
