@@ -1,6 +1,8 @@
 import { DEFAULT_MATERIALS } from "../plan/defaults";
 import type { FixtureDoc, PlanDocument } from "../plan/schema";
-import { planDocumentSchema, PLAN_SCHEMA_VERSION } from "../plan/schema";
+import { planDocumentSchema, PLAN_SCHEMA_VERSION, settingsSchema } from "../plan/schema";
+import { baseCabinet } from "../fixtures/base-cabinet";
+import { baseCabinetParamsSchema } from "../fixtures/base-cabinet/params";
 import { inches } from "../units/length";
 import { seededRandom } from "./random";
 
@@ -29,6 +31,10 @@ const FREE_KINDS: readonly Gen[] = [
  */
 export function generatePlan(n: number, seed = 1): PlanDocument {
   const r = seededRandom(seed);
+  // Stop tracks sit on the default cabinet's counter.
+  const materials = DEFAULT_MATERIALS.map((m) => ({ ...m }));
+  const settings = settingsSchema.parse({});
+  const counterMm = baseCabinet.workSurfaceMm?.(baseCabinetParamsSchema.parse({}), { settings, materials }) ?? inches(36);
   const side = Math.min(99_000, Math.max(6000, (Math.ceil(Math.sqrt(n)) + 1) * CELL_MM));
   const fixtures: FixtureDoc[] = [];
   const onWalls = Math.round(n * 0.4);
@@ -49,7 +55,7 @@ export function generatePlan(n: number, seed = 1): PlanDocument {
     if (isShelf) fixtures.push({ id, kind: "tool-shelf", label: "", placement: { mode: "wall", wallId, offsetMm: offset, elevationMm: 0 }, params: { preset: pick(r, ["compact-miter-saw", "sliding-miter-saw", "benchtop-planer"]), widthMm: width } });
     else fixtures.push({ id, kind: "base-cabinet", label: "", placement: { mode: "wall", wallId, offsetMm: offset, elevationMm: 0 }, params: { widthMm: width, sections: [{ fill: pick(r, ["drawers", "drawers", "doors", "open"]), drawerCount: pick(r, [3, 4, 5]) }] } });
     if (bay % 5 === 0 && bay > 0 && fixtures.length < onWalls) {
-      fixtures.push({ id: `f${fixtures.length + 1}`, kind: "stop-track", label: "", placement: { mode: "wall", wallId, offsetMm: offset, elevationMm: inches(35.8) }, params: { lengthMm: inches(36), cutLengthsMm: [inches(12), inches(24)] } });
+      fixtures.push({ id: `f${fixtures.length + 1}`, kind: "stop-track", label: "", placement: { mode: "wall", wallId, offsetMm: offset, elevationMm: counterMm }, params: { lengthMm: inches(36), cutLengthsMm: [inches(12), inches(24)] } });
     }
     offset += width;
     bay++;
@@ -66,8 +72,8 @@ export function generatePlan(n: number, seed = 1): PlanDocument {
   return planDocumentSchema.parse({
     schemaVersion: PLAN_SCHEMA_VERSION,
     room: { walls: [1, 2, 3, 4].map((i) => ({ id: `w${i}`, label: "", lengthMm: side })), ceilingHeightMm: 3000 },
-    materials: DEFAULT_MATERIALS.map((m) => ({ ...m })),
+    materials,
     fixtures,
-    settings: {},
+    settings,
   });
 }
