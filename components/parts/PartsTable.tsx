@@ -30,7 +30,8 @@ export function PartsTable({ rows, fmt }: { rows: PartRow[]; fmt: Formatters }) 
   const [groupBy, setGroupBy] = useState<GroupBy>("materialName");
   const [filter, setFilter] = useState("");
   const [expanded, setExpanded] = useState<ExpandedState>(true);
-  const grouping: GroupingState = groupBy === "none" ? [] : [groupBy];
+  // A stable array: a new one each render would make the table regroup and reset expansion in a loop.
+  const grouping = useMemo<GroupingState>(() => (groupBy === "none" ? [] : [groupBy]), [groupBy]);
 
   const columns = useMemo<ColumnDef<PartRow>[]>(
     () => [
@@ -58,6 +59,8 @@ export function PartsTable({ rows, fmt }: { rows: PartRow[]; fmt: Formatters }) 
     onExpandedChange: setExpanded,
     onGlobalFilterChange: setFilter,
     globalFilterFn: "includesString",
+    autoResetExpanded: false,
+    autoResetPageIndex: false,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),

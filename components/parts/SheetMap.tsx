@@ -76,26 +76,38 @@ export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; ke
             </g>
           );
         })}
-        {sheet.cuts.map((c) => {
-          const rip = c.kind === "rip";
-          const x1 = rip ? c.x1Mm : c.x1Mm + kerfMm / 2;
-          const y1 = rip ? c.y1Mm + kerfMm / 2 : c.y1Mm;
-          const x2 = rip ? c.x2Mm : c.x2Mm + kerfMm / 2;
-          const y2 = rip ? c.y2Mm + kerfMm / 2 : c.y2Mm;
-          const r = font * 0.75;
-          return (
-            <g key={`c${c.seq}`}>
-              <line x1={x1} y1={y1} x2={x2} y2={y2} stroke="#b5432c" strokeWidth={2} strokeDasharray="16 6" />
-              <circle cx={x1 + (rip ? r : 0)} cy={y1 + (rip ? 0 : r)} r={r} fill="#b5432c" />
-              <text x={x1 + (rip ? r : 0)} y={y1 + (rip ? 0 : r)} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="central" fill="white">
-                {c.seq}
-              </text>
-            </g>
-          );
-        })}
+        {cutMarks(sheet, kerfMm, font * 0.75).map((m) => (
+          <g key={`c${m.seq}`}>
+            <line x1={m.x1} y1={m.y1} x2={m.x2} y2={m.y2} stroke="#b5432c" strokeWidth={2} strokeDasharray="16 6" />
+            <circle cx={m.cx} cy={m.cy} r={m.r} fill="#b5432c" />
+            <text x={m.cx} y={m.cy} fontSize={m.r * 1.07} textAnchor="middle" dominantBaseline="central" fill="white">
+              {m.seq}
+            </text>
+          </g>
+        ))}
       </svg>
     </figure>
   );
+}
+
+/** Where to draw each cut and its number; numbers slide along their cut so they do not cover each other. */
+function cutMarks(sheet: SheetLayout, kerfMm: number, r: number) {
+  const placed: { cx: number; cy: number }[] = [];
+  return sheet.cuts.map((c) => {
+    const rip = c.kind === "rip";
+    const x1 = rip ? c.x1Mm : c.x1Mm + kerfMm / 2;
+    const y1 = rip ? c.y1Mm + kerfMm / 2 : c.y1Mm;
+    const x2 = rip ? c.x2Mm : c.x2Mm + kerfMm / 2;
+    const y2 = rip ? c.y2Mm + kerfMm / 2 : c.y2Mm;
+    let cx = x1 + (rip ? r : 0);
+    let cy = y1 + (rip ? 0 : r);
+    for (let i = 0; i < 20 && placed.some((p) => Math.hypot(p.cx - cx, p.cy - cy) < 2 * r); i++) {
+      if (rip) cx = Math.min(x2 - r, cx + 2.2 * r);
+      else cy = Math.min(y2 - r, cy + 2.2 * r);
+    }
+    placed.push({ cx, cy });
+    return { seq: c.seq, x1, y1, x2, y2, cx, cy, r };
+  });
 }
 
 /** The cut order in words, for the saw: "1. Rip the sheet 610 mm from the near edge". */
