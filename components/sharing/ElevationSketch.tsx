@@ -4,7 +4,7 @@ import { formatLength } from "@/lib/engine/units/format-length";
 const num = (v: unknown, fallback: number) => (typeof v === "number" && Number.isFinite(v) && v > 0 ? v : fallback);
 
 /** One wall seen from inside the room: openings and the fixtures placed against it, with heights from their parameters. */
-export function ElevationSketch({ document, wallId, highlight = [] }: { document: PlanDocument; wallId: string; highlight?: string[] }) {
+export function ElevationSketch({ document, wallId, highlight = [], photo }: { document: PlanDocument; wallId: string; highlight?: string[]; photo?: { url: string; widthMm: number; heightMm: number } }) {
   const wall = document.room.walls.find((w) => w.id === wallId);
   if (!wall) return null;
   const H = document.room.ceilingHeightMm;
@@ -15,6 +15,8 @@ export function ElevationSketch({ document, wallId, highlight = [] }: { document
     <figure className="flex flex-col gap-1">
       <svg viewBox={`-200 -200 ${L + 400} ${H + 500}`} className="w-full" role="img" aria-label={`Elevation of ${wall.label || wall.id}`}>
         <rect x={0} y={0} width={L} height={H} fill="#f4efe9" stroke="#4b3423" strokeWidth={25} />
+        {/* A scaled reference photo, from the wall's start at floor level. */}
+        {photo && <image href={photo.url} x={0} y={H - photo.heightMm} width={photo.widthMm} height={photo.heightMm} opacity={0.6} preserveAspectRatio="none" />}
         {document.room.openings
           .filter((o) => o.wallId === wallId)
           .map((o) => {

@@ -1,5 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { randomUUID } from "node:crypto";
+import sharp from "sharp";
 
 async function signIn(page: Page, email: string, password: string) {
   await page.goto("/signin");
@@ -91,4 +92,29 @@ test("owner shares a read-only link; a visitor opens it, signs up and copies it;
   await later.screenshot({ path: "tests/artifacts/sharing-revoked.png" });
   await owner.close();
   await visitor.close();
+});
+
+test("an owner uploads a wall photo from the browser and scales it by two points", async ({ page }) => {
+  const email = `photo-${randomUUID().slice(0, 8)}@example.test`;
+  expect((await page.request.post("/api/v1/account", { data: { name: "Sam Alder", email, password: "Alder-and-ash-27" } })).status()).toBe(201);
+  await signIn(page, email, "Alder-and-ash-27");
+  const plan = await (await page.request.post("/api/v1/plans", { data: { name: "Photo shop" } })).json();
+  await page.goto(`/plans/${plan.plan.id}/share`);
+  // A 800 x 600 photo with GPS in its EXIF; the browser PUTs it straight to storage with the presigned URL.
+  const jpeg = await sharp({ create: { width: 800, height: 600, channels: 3, background: "#b49a7a" } })
+    .jpeg()
+    .withExif({ IFD0: { Make: "PhoneCo" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "47/1 36/1 0/1" } })
+    .toBuffer();
+  await page.locator('input[type="file"]').setInputFiles({ name: "wall.jpg", mimeType: "image/jpeg", buffer: jpeg });
+  const img = page.getByRole("img", { name: /^Wall photo / });
+  await expect(img).toBeVisible();
+  const box = (await img.boundingBox())!;
+  // Two points half the photo's width apart (400 px), marked as 48 in: 1219.2 / 400 = 3.048 mm per pixel.
+  await img.click({ position: { x: box.width * 0.25, y: box.height * 0.5 } });
+  await img.click({ position: { x: box.width * 0.75, y: box.height * 0.5 } });
+  await page.getByLabel("Distance (in)").fill("48");
+  await page.getByRole("button", { name: "Set the scale" }).click();
+  await expect(page.getByText(/3\.0[45] mm per pixel/)).toBeVisible();
+  await expect(page.getByRole("img", { name: /^Elevation of / })).toBeVisible();
+  await page.screenshot({ path: "tests/artifacts/sharing-wall-photo.png", fullPage: true });
 });

@@ -2,9 +2,11 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { LinksSection } from "@/components/sharing/LinksSection";
+import { WallPhotos } from "@/components/sharing/WallPhotos";
 import { PeopleSection } from "@/components/sharing/PeopleSection";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
+import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { accessPlan } from "@/lib/server/policy";
 import { currentUser } from "@/lib/server/session";
 
@@ -18,7 +20,7 @@ export default async function SharePage({ params }: { params: Promise<{ id: stri
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
   let access;
   try {
-    access = await accessPlan(em, id, user, "viewer");
+    access = await accessPlan(em, id, user, "viewer", { withDocument: true });
   } catch (e) {
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;
@@ -32,6 +34,7 @@ export default async function SharePage({ params }: { params: Promise<{ id: stri
       </header>
       {isOwner && <LinksSection planId={id} />}
       <PeopleSection planId={id} isOwner={isOwner} />
+      <WallPhotos planId={id} document={access.plan.document as unknown as PlanDocument} canEdit={access.role !== "viewer"} />
     </div>
   );
 }
