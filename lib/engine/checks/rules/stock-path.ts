@@ -5,7 +5,7 @@ import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { centroid } from "../geom/polygon";
 import { centreLineCover, coveredFromStart, makeStrip, stripThroughZone, type Strip } from "../geom/strip";
-import { KIND, PURPOSE, isMiterStation, worldWorkSurface } from "../kinds";
+import { KIND, PURPOSE, hasZone, isMiterStation, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
 
 const ID = "stock-path";
@@ -35,7 +35,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const n = ctx.numbers;
   const note = ctx.presetNote("longestStockMm", "stockSupportFraction");
   for (const f of ctx.fixtures) {
-    if ((ids && !ids.has(f.id)) || !isMiterStation(f)) continue;
+    // Only crosscut tools have a stock path along the run (a planer on a tool shelf feeds front to back).
+    if ((ids && !ids.has(f.id)) || !isMiterStation(f) || !hasZone(f, PURPOSE.stockPathLeft, PURPOSE.stockPathRight)) continue;
     const table = worldWorkSurface(f);
     if (table === undefined) continue;
     for (const side of ["left", "right"] as const) {
