@@ -227,3 +227,26 @@ describe("table saw infeed, outfeed and outfeed support", () => {
     expect(f.shortfall).toBeCloseTo(10, 1);
   });
 });
+
+describe("advice rules apply only when their hazard is in the plan", () => {
+  const part = (name: string): Part => ({ id: `c:${name}`, fixtureId: "c", name, qty: 1, lengthMm: 600, widthMm: 600, thicknessMm: 1, materialId: "hpl", stock: "sheet", grain: "none", edges: [], joinery: [] });
+  const run = (parts: Part[], fx = [counter("c", 0, 600)]) => {
+    const plan = makePlan(5000, 5000);
+    return evaluatePlan(plan, derive(plan, room, fx, [], parts));
+  };
+  it("contact cement fumes (Ontario MOL hazard alert; CPSC 16 CFR 1302) with a laminate part, not without", () => {
+    expect(run([part("Countertop laminate")]).some((f) => f.ruleId === "solvent-fumes" && f.fixtureIds.includes("c"))).toBe(true);
+    expect(run([part("Countertop core")]).some((f) => f.ruleId === "solvent-fumes")).toBe(false);
+  });
+  it("no saw, no guarding or dust advice (OSHA 1910.213(b)(3); NIOSH REL 1 mg/m3); no panel, no electrical advice", () => {
+    const ids = new Set(run([]).map((f) => f.ruleId));
+    for (const id of ["saw-guarding", "wood-dust", "electrical-work"]) expect(ids.has(id)).toBe(false);
+  });
+  it("a wall cabinet clear of the raised saw head passes (geometry of the fixture's zone)", () => {
+    const saw = fixture("saw", { kind: "tool-shelf", x: 1200, y: 0, w: 600, d: 610, h: 700, work: 36 * IN, zones: [{ purpose: "miter-head", x: 0, y: 0, z: 36 * IN, w: 600, d: 610, h: 600 }] });
+    const wc = fixture("wc2", { kind: "wall-cabinet", x: 1300, y: 0, z: 36 * IN + 600, w: 400, d: 305, h: 700 });
+    const plan = makePlan(5000, 5000);
+    const f = evaluatePlan(plan, derive(plan, room, [saw, wc])).find((x) => x.ruleId === "wall-cabinet-clearance" && x.subjectId === "wc2")!;
+    expect(f.pass).toBe(true);
+  });
+});
