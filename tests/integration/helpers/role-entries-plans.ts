@@ -62,6 +62,8 @@ export const planEntries: Entry[] = [
     expect: planEdit(200),
   },
   { file: "v1/plans/[id]/export/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export` }), expect: planRead(200) },
+  { file: "v1/plans/[id]/export/parts.csv/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export/parts.csv` }), expect: planRead(200) },
+  { file: "v1/plans/[id]/export/shopping.csv/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export/shopping.csv` }), expect: planRead(200) },
   { file: "v1/plans/import/route.ts", method: "POST", call: () => ({ path: "/api/v1/plans/import", body: { format: "benchwright-plan", name: "Matrix import", document: sampleDoc() } }), expect: signedIn(201) },
   { file: "v1/schema/plan/route.ts", method: "GET", call: () => ({ path: "/api/v1/schema/plan" }), expect: everyone(200), note: "the format is public" },
   { file: "v1/analyze/route.ts", method: "POST", call: () => ({ path: "/api/v1/analyze", body: sampleDoc() }), expect: everyone(200), note: "stateless: analyses the posted plan, stores nothing" },
