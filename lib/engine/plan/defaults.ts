@@ -15,6 +15,12 @@ export const DEFAULT_MATERIALS: readonly Material[] = Object.freeze([
   { id: "mdf-19", name: "3/4 in MDF (19 mm)", form: "sheet", thicknessMm: 19.05, sheetLengthMm: 2440, sheetWidthMm: 1220, species: "mdf" },
   { id: "poplar-19", name: "Poplar board, 3/4 in (19 mm)", form: "board", thicknessMm: 19, species: "yellow-poplar" },
   { id: "maple-19", name: "Maple board, 3/4 in (19 mm)", form: "board", thicknessMm: 19, species: "sugar maple" },
+  // Stock the fixture kinds default to: face-frame and edge hardwood (surfaced 4/4, 3/4 in), 1/2 in MDF,
+  // 1/4 in pegboard, and 2x construction lumber (1-1/2 in actual). Common practice.
+  { id: "hardwood-19", name: "Hardwood board, 3/4 in (19 mm)", form: "board", thicknessMm: 19.05, species: "yellow-poplar" },
+  { id: "mdf-12", name: "1/2 in MDF (12.7 mm)", form: "sheet", thicknessMm: 12.7, sheetLengthMm: 2440, sheetWidthMm: 1220, species: "mdf" },
+  { id: "pegboard-6", name: "1/4 in pegboard (6.35 mm)", form: "sheet", thicknessMm: 6.35, sheetLengthMm: 2440, sheetWidthMm: 1220, species: "hardboard" },
+  { id: "lumber-2x", name: "2x construction lumber (38 mm)", form: "board", thicknessMm: 38.1, species: "Douglas-fir (coast)" },
 ] satisfies Material[]);
 
 /** A new plan: an empty two-car garage, 6.1 m wide at the door wall and 6.7 m deep (our own example), with the default stock and no fixtures. */

@@ -13,7 +13,7 @@ describe("newPlanDocument", () => {
     expect(planDocumentSchema.parse(doc)).toEqual(doc);
     expect(doc.room.walls.map((w) => w.lengthMm)).toEqual([6100, 6700, 6100, 6700]);
     expect(doc.fixtures).toEqual([]);
-    expect(doc.materials.map((m) => m.id)).toEqual(["ply-18", "ply-12", "ply-6", "mdf-19", "poplar-19", "maple-19"]);
+    expect(doc.materials.map((m) => m.id)).toEqual(["ply-18", "ply-12", "ply-6", "mdf-19", "poplar-19", "maple-19", "hardwood-19", "mdf-12", "pegboard-6", "lumber-2x"]);
     const room = solveRoom(doc.room);
     expect(room.report.closureErrorMm).toBeCloseTo(0, 9);
     expect(room.areaMm2).toBeCloseTo(6100 * 6700, 0);
