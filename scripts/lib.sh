@@ -1,6 +1,7 @@
 # Shared set-up steps for scripts/start.sh and scripts/test.sh. Source it; do not run it.
 # Everything runs on loopback; the PostgreSQL data folder lives inside the project (.data/).
 set -euo pipefail
+export NEXT_TELEMETRY_DISABLED=1
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$ROOT"
