@@ -99,6 +99,26 @@ function clip(pts: UV[], inside: (p: UV) => number): UV[] {
  * the strip's sides from counting.
  */
 export function firstHitConvex(s: Strip, poly: readonly Vec2[], shrink = 1): number {
+  // Fast paths without allocating: the polygon's extent across and along the strip.
+  const lo = s.vMin + shrink;
+  const hi = s.vMax - shrink;
+  let uMin = Infinity;
+  let uMax = -Infinity;
+  let vMin = Infinity;
+  let vMax = -Infinity;
+  for (const p of poly) {
+    const dx = p.x - s.origin.x;
+    const dy = p.y - s.origin.y;
+    const u = dx * s.u.x + dy * s.u.y;
+    const v = dx * s.v.x + dy * s.v.y;
+    if (u < uMin) uMin = u;
+    if (u > uMax) uMax = u;
+    if (v < vMin) vMin = v;
+    if (v > vMax) vMax = v;
+  }
+  if (vMax < lo || vMin > hi || uMax < 0) return Infinity;
+  // Wholly inside the band across: the nearest corner along it, or 0 when it straddles the start.
+  if (vMin >= lo && vMax <= hi) return Math.max(0, uMin);
   let pts: UV[] = poly.map((p) => toStrip(s, p));
   pts = clip(pts, (p) => p.v - (s.vMin + shrink));
   if (!pts.length) return Infinity;
