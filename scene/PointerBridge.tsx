@@ -57,7 +57,11 @@ export function PointerBridge() {
       downAt = { x: e.clientX, y: e.clientY };
       if (tool === "idle" && input.hit?.type !== "fixture") return; // empty space: let the camera orbit; a click clears on release
       setOrbit(false);
-      el.setPointerCapture(e.pointerId);
+      try {
+        el.setPointerCapture(e.pointerId);
+      } catch {
+        // Synthetic events (benchmarks) carry no live pointer to capture.
+      }
       ed.tools.down(input);
       el.focus({ preventScroll: true });
     };
