@@ -65,6 +65,14 @@ describe.skipIf(!hasServer)("share links, collaborators and copies", () => {
     expect(past.status).toBe(422);
     expect(past.body.error.fields.expiresAt).toBeTruthy();
 
+    // A link that expires in 1.5 s works, then answers 404.
+    const soon = await c.owner.client.post(`/api/v1/plans/${planId}/links`, { expiresAt: new Date(Date.now() + 1500).toISOString() });
+    expect((await new Client().get(`/api/v1/shared/${soon.body.token}`)).status).toBe(200);
+    await new Promise((r) => setTimeout(r, 1800));
+    expect((await new Client().get(`/api/v1/shared/${soon.body.token}`)).status).toBe(404);
+    const listed = await c.owner.client.get(`/api/v1/plans/${planId}/links`);
+    expect(listed.body.links.find((l: { id: string }) => l.id === soon.body.link.id).state).toBe("expired");
+
     expect((await new Client().get(`/api/v1/shared/${"x".repeat(43)}`)).status).toBe(404);
     expect((await new Client().get(`/api/v1/shared/short`)).status).toBe(404);
   });

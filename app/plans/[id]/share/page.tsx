@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { LinksSection } from "@/components/sharing/LinksSection";
+import { PresetPicker } from "@/components/teaching/PresetPicker";
 import { WallPhotos } from "@/components/sharing/WallPhotos";
 import { PeopleSection } from "@/components/sharing/PeopleSection";
 import { requestEm } from "@/lib/server/db";
@@ -34,6 +35,7 @@ export default async function SharePage({ params }: { params: Promise<{ id: stri
       </header>
       {isOwner && <LinksSection planId={id} />}
       <PeopleSection planId={id} isOwner={isOwner} />
+      <PresetPicker planId={id} canEdit={access.role !== "viewer"} />
       <WallPhotos planId={id} document={access.plan.document as unknown as PlanDocument} canEdit={access.role !== "viewer"} />
     </div>
   );
