@@ -5,6 +5,7 @@ import { useUi } from "@/lib/client/react/useEditorState";
 import { Catalogue } from "./Catalogue";
 import { FindingsList } from "./FindingsList";
 import { OutlineList } from "./OutlineList";
+import { PartsTab } from "./PartsTab";
 import { PropertiesPanel } from "./PropertiesPanel";
 import { RevisionsPanel } from "./RevisionsPanel";
 import { RoomForm } from "./RoomForm";
@@ -61,7 +62,7 @@ export function EditorShell({ plan }: { plan: PlanInit }) {
                   ),
                 },
                 { id: "checks", label: "Checks", body: () => <FindingsList /> },
-                { id: "parts", label: "Parts", body: () => <p className="text-sm text-walnut-500">The parts list appears here.</p> },
+                { id: "parts", label: "Parts", body: () => <PartsTab /> },
                 { id: "history", label: "History", body: () => <RevisionsPanel api={api} planId={plan.id} saver={saver} editor={editor} /> },
               ]}
             />
