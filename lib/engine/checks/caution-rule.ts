@@ -11,8 +11,10 @@ export function cautionRule(def: {
   numbers: { label: string; value: string }[];
   sources: RuleSource[];
   cautions: string[];
-  /** Fixture ids the caution is about; none means it does not apply. */
-  applies(ctx: CheckContext): string[];
+  /** Fixture ids the caution is about; null, or an empty list unless `plain` is set, means it does not apply. */
+  applies(ctx: CheckContext): string[] | null;
+  /** Applies with an empty list too (the hazard is in the room, not in a fixture). */
+  plain?: boolean;
   message(ctx: CheckContext, fixtureIds: string[]): string;
 }): Rule<CheckContext> {
   return {
@@ -27,7 +29,7 @@ export function cautionRule(def: {
     scope: "plan",
     evaluate(_plan, ctx) {
       const ids = def.applies(ctx);
-      if (!ids.length) return [];
+      if (!ids || (!ids.length && !def.plain)) return [];
       return [finding(def.id, "advice", false, def.id, `${def.message(ctx, ids)} Local codes and licensed practice come first.`, { fixtureIds: ids })];
     },
   };

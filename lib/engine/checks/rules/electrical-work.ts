@@ -9,6 +9,8 @@ export const electricalWorkRule = cautionRule({
   numbers: [],
   sources: [{ citation: "NFPA 70 (NEC) as adopted locally; permits and inspection by the local authority", status: "practice" }],
   cautions: ["Have a licensed electrician add circuits; garage outlets usually need GFCI protection under the adopted code."],
-  applies: (ctx) => ctx.plan.room.obstacles.filter((o) => o.kind === "panel" || o.kind === "outlet").map((o) => o.id),
+  // The panel and outlets are obstacles, not fixtures: the finding names no fixture.
+  plain: true,
+  applies: (ctx) => (ctx.plan.room.obstacles.some((o) => o.kind === "panel" || o.kind === "outlet") ? [] : null),
   message: () => "Panel and outlets in this plan: new circuits, GFCI protection and panel work are for a licensed electrician, with a permit where required.",
 });
