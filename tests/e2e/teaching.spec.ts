@@ -78,5 +78,14 @@ test("an instructor presents a walk-through step by step; a student follows from
   await tp.keyboard.press("End");
   await expect(tp.getByTestId("step-counter")).toHaveText("Step 4 of 4");
   await expect(tp.getByTestId("step-title")).toHaveText("Stock path on both sides of the saw");
+
+  // The plan adopts a class preset (walkways 42 in: NKBA work aisle for one person, secondary copy); the presentation names it.
+  const presetName = `Class of ${Date.now()}`;
+  expect((await tp.request.post("/api/v1/presets", { data: { name: presetName, numbers: { walkwayMm: 1066.8 }, published: true } })).status()).toBe(201);
+  await tp.goto(`/plans/${plan.plan.id}/share`);
+  await tp.getByLabel("Preset").selectOption({ label: `${presetName} · Ines Larch` });
+  await expect(tp.getByText("The checks now use this preset's numbers.")).toBeVisible();
+  await tp.goto(`/present/${id}`);
+  await expect(tp.getByText(`preset: ${presetName}`)).toBeVisible();
   await teacher.close();
 });
