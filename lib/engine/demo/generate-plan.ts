@@ -4,7 +4,7 @@ import { planDocumentSchema, PLAN_SCHEMA_VERSION, settingsSchema } from "../plan
 import { baseCabinet } from "../fixtures/base-cabinet";
 import { baseCabinetParamsSchema } from "../fixtures/base-cabinet/params";
 import { inches } from "../units/length";
-import { seededRandom } from "./random";
+import { seededRandom } from "../geometry/seeded-random";
 
 /** Grid cell for free-standing fixtures, mm. */
 const CELL_MM = 3000;

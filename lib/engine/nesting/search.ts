@@ -1,6 +1,6 @@
 import { packGlobal, packOrdered } from "./guillotine";
 import type { PackItem, PackOutcome, PackStock, ScoreRule, SplitRule } from "./guillotine";
-import { seededRandom } from "./rng";
+import { seededRandom } from "../geometry/seeded-random";
 
 /** A packing heuristic: how pieces are ordered, where each goes, and how leftover space is split. */
 export interface Strategy {

@@ -5,7 +5,7 @@
  */
 import type { Grain, Part } from "@/lib/engine/fixtures/types";
 import type { Material } from "@/lib/engine/plan/schema";
-import { seededRandom } from "@/lib/engine/nesting/rng";
+import { seededRandom } from "@/lib/engine/geometry/seeded-random";
 
 const IN = 25.4;
 

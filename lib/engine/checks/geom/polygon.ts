@@ -1,4 +1,5 @@
 import type { Bounds2, Prism, Vec2 } from "../../geometry/types";
+import { distanceToSegment } from "../../geometry/polygon";
 
 /** Floor bounds of a polygon, mm. */
 export function polygonBounds(poly: readonly Vec2[]): Bounds2 {
@@ -84,14 +85,8 @@ export function pointInPolygon(p: Vec2, poly: readonly Vec2[]): boolean {
   return inside;
 }
 
-/** Distance from a point to a segment, mm. */
-export function pointSegmentDistance(p: Vec2, a: Vec2, b: Vec2): number {
-  const ex = b.x - a.x;
-  const ey = b.y - a.y;
-  const len2 = ex * ex + ey * ey;
-  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * ex + (p.y - a.y) * ey) / len2));
-  return Math.hypot(p.x - (a.x + t * ex), p.y - (a.y + t * ey));
-}
+/** Distance from a point to a segment, mm (the geometry module's one definition). */
+export const pointSegmentDistance = distanceToSegment;
 
 /** Distance from a point to a polygon's outline, mm. */
 export function distanceToOutline(p: Vec2, poly: readonly Vec2[]): number {

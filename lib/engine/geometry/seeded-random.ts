@@ -1,4 +1,4 @@
-/** A small seeded generator (mulberry32) so searches repeat exactly for a given seed. Returns numbers in [0, 1). */
+/** A small seeded generator (mulberry32): the same seed gives the same numbers, in [0, 1), on every machine (repeatable searches, demo plans and tests). */
 export function seededRandom(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
