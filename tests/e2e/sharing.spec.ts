@@ -53,8 +53,10 @@ test("owner shares a read-only link; a visitor opens it, signs up and copies it;
   await vp.getByRole("tab", { name: "Checks" }).click();
   await expect(vp.getByTestId("findings-summary")).toContainText(/\d+ checks? met/);
   await vp.getByRole("tab", { name: "Parts" }).click();
-  expect(await vp.getByTestId("parts-table").locator("tbody tr").count()).toBeGreaterThan(3);
-  // Nothing to edit: no text fields, no save.
+  await expect(vp.getByTestId("parts-view")).toBeVisible();
+  expect(await vp.getByTestId("parts-view").locator("tbody tr").count()).toBeGreaterThan(3);
+  // Nothing to edit on the plan views: no text fields, no save.
+  await vp.getByRole("tab", { name: "Plan", exact: true }).click();
   await expect(vp.getByRole("textbox")).toHaveCount(0);
   await expect(vp.getByRole("button", { name: /save/i })).toHaveCount(0);
   // The API refuses a write from this browser too.

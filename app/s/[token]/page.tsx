@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ReadOnlyFindings } from "@/components/sharing/ReadOnlyFindings";
-import { ReadOnlyParts } from "@/components/sharing/ReadOnlyParts";
+import { PartsView } from "@/components/parts/PartsView";
 import { CopyPlanButton } from "@/components/sharing/CopyPlanButton";
 import { SharedPlanView } from "@/components/sharing/SharedPlanView";
 import { requestEm } from "@/lib/server/db";
@@ -49,7 +49,7 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
         document={plan.document}
         preset={preset ? { name: preset.name, ownerName: preset.ownerName, numbers: preset.numbers as Record<string, number> } : null}
         checks={analysis.error ? <p className="text-sm text-brick-700">{analysis.error}</p> : <ReadOnlyFindings findings={analysis.findings} />}
-        parts={<ReadOnlyParts parts={analysis.parts} document={plan.document} />}
+        parts={<PartsView plan={plan.document} />}
       />
     </div>
   );
