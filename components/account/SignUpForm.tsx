@@ -25,7 +25,11 @@ export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
         return;
       }
       const signed = await signIn("credentials", { redirect: false, email: body.email, password: body.password });
-      if (signed?.ok) window.location.assign(callbackUrl);
+      if (signed?.ok) {
+        // Ask for the address-confirmation e-mail; the account works meanwhile, so a failure here is not fatal.
+        await fetch("/api/v1/account/verify", { method: "POST" }).catch(() => undefined);
+        window.location.assign(callbackUrl);
+      }
       else setErrors({ _: "Your account was created, but signing in failed. Try signing in." });
     } catch {
       setErrors({ _: "The server could not be reached. Check your connection and try again." });

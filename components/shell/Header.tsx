@@ -20,6 +20,7 @@ export function Header({ user }: { user: HeaderUser | null }) {
           {user && <Link href="/plans" className="hover:text-walnut-900">My plans</Link>}
           <Link href="/rules" className="hover:text-walnut-900">Clearance rules</Link>
           <Link href="/class" className="hover:text-walnut-900">Class</Link>
+          {(user?.role === "instructor" || user?.role === "admin") && <Link href="/presets" className="hover:text-walnut-900">Rule presets</Link>}
           {user?.role === "admin" && <Link href="/admin" className="hover:text-walnut-900">Accounts</Link>}
         </nav>
         <div className="flex items-center gap-3 text-sm">
