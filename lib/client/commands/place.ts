@@ -2,13 +2,14 @@ import type { FixtureDoc, Placement } from "@/lib/engine/plan/schema";
 import type { Editor } from "../editor";
 import { addFixture, setPlacement } from "../store/fixture-ops";
 import { newId } from "../store/ids";
+import { wallExtent } from "../tools/neighbours";
 
 /** The first free spot along a wall after the fixtures already on it, mm from its start. */
 export function nextFreeOffset(ed: Editor, wallId: string): number {
   let end = 0;
   for (const f of ed.doc.fixtures) {
     if (f.placement.mode !== "wall" || f.placement.wallId !== wallId) continue;
-    end = Math.max(end, f.placement.offsetMm + (ed.footprint(f.id)?.widthMm ?? 0));
+    end = Math.max(end, f.placement.offsetMm + wallExtent(ed, f.id).x1);
   }
   return end;
 }

@@ -3,7 +3,7 @@ import type { Placement, PlanDocument } from "@/lib/engine/plan/schema";
 import type { Editor } from "../editor";
 import { setPlacement } from "../store/fixture-ops";
 import { createIdle } from "./idle";
-import { wallSpans, SNAP_THRESHOLD_MM } from "./neighbours";
+import { wallExtent, wallSpans, SNAP_THRESHOLD_MM } from "./neighbours";
 import { snapAlongWall, snapToGrid } from "./snap";
 import type { PointerInput, ToolState } from "./types";
 import { alongWall } from "./wall-math";
@@ -15,6 +15,8 @@ import { alongWall } from "./wall-math";
  */
 export function createDragging(leadId: string, grab: Vec2): ToolState {
   let starts = new Map<string, Placement>();
+  // The lead's real extent along its wall, measured once at the start (it does not change while sliding).
+  let extent = { x0: 0, x1: 0 };
 
   function leadPlacement(ed: Editor, input: PointerInput, start: Placement): Placement {
     const snap = ed.ui.getState().snapping && !input.alt;
@@ -27,16 +29,16 @@ export function createDragging(leadId: string, grab: Vec2): ToolState {
     const wall = ed.wall(start.wallId);
     if (!wall) return start;
     const proposed = start.offsetMm + alongWall(wall, input.point) - alongWall(wall, grab);
-    const { offsetMm } = snapAlongWall({
-      offsetMm: proposed,
-      widthMm: ed.footprint(leadId)?.widthMm ?? 0,
+    const snapped = snapAlongWall({
+      offsetMm: proposed + extent.x0,
+      widthMm: extent.x1 - extent.x0,
       wallLengthMm: wall.lengthMm,
       neighbours: wallSpans(ed, start.wallId, new Set(starts.keys())),
       gridStepMm: step,
       thresholdMm: SNAP_THRESHOLD_MM,
       enabled: snap,
     });
-    return { ...start, offsetMm };
+    return { ...start, offsetMm: snapped.offsetMm - extent.x0 };
   }
 
   return {
@@ -48,6 +50,7 @@ export function createDragging(leadId: string, grab: Vec2): ToolState {
         const f = ed.fixture(id);
         if (f) starts.set(id, f.placement);
       }
+      extent = wallExtent(ed, leadId);
       ed.history.beginGesture();
     },
     move(ed, input) {

@@ -58,3 +58,22 @@ describe("incremental analysis", () => {
     expect(ed.derived.getState().fixtureById.get(a)).toBeDefined();
   });
 });
+
+describe("snapping to what a fixture really occupies", () => {
+  it("a cabinet dragged to the wall start snaps its body (with overhangs) to the corner, not past it", async () => {
+    const { alongWall } = await import("@/lib/client/tools/wall-math");
+    const ed = new Editor({ doc: newPlanDocument(), engine: liveEngine });
+    const id = place(ed, "base-cabinet", 600);
+    ed.ui.setState({ snapping: true, gridStepMm: 25.4 });
+    const wall = ed.wall("w3")!;
+    const at = (t: number) => ({ x: wall.start.x + wall.dir.x * t + wall.inward.x * 300, y: wall.start.y + wall.dir.y * t + wall.inward.y * 300 });
+    ed.tools.down({ point: at(900), hit: { type: "fixture", id } });
+    ed.tools.move({ point: at(320), hit: { type: "fixture", id } });
+    ed.tools.up({ point: at(320), hit: { type: "fixture", id } });
+    const body = ed.placed(id)!.body.polygon.map((p) => alongWall(wall, p));
+    // The body's first edge lands on the corner (within float noise): 0 mm along the wall.
+    expect(Math.min(...body)).toBeCloseTo(0, 6);
+    const outside = ed.derived.getState().findings.filter((f) => f.ruleId === "in-room" && !f.pass && f.fixtureIds.includes(id));
+    expect(outside).toHaveLength(0);
+  });
+});
