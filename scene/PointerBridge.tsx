@@ -20,6 +20,7 @@ export function PointerBridge() {
   useEffect(() => {
     const el = gl.domElement;
     let grabZ = 0;
+    // Where a press on empty space began (a click there, without a drag, clears the selection).
     let downAt: { x: number; y: number } | null = null;
 
     const roots = () => {
@@ -54,8 +55,11 @@ export function PointerBridge() {
       const tool = ed.ui.getState().tool;
       const input = toInput(e, true);
       if (!input) return;
-      downAt = { x: e.clientX, y: e.clientY };
-      if (tool === "idle" && input.hit?.type !== "fixture") return; // empty space: let the camera orbit; a click clears on release
+      downAt = null;
+      if (tool === "idle" && input.hit?.type !== "fixture") {
+        downAt = { x: e.clientX, y: e.clientY };
+        return; // empty space: let the camera orbit; a click clears on release
+      }
       setOrbit(false);
       try {
         el.setPointerCapture(e.pointerId);
@@ -75,10 +79,10 @@ export function PointerBridge() {
 
     const up = (e: PointerEvent) => {
       if (e.button !== 0) return;
-      const tool = ed.ui.getState().tool;
       const input = toInput(e, false);
-      if (tool === "idle" && downAt && Math.hypot(e.clientX - downAt.x, e.clientY - downAt.y) < 4 && input && !e.shiftKey) ed.select([]);
-      else if (input) ed.tools.up(input);
+      if (downAt) {
+        if (Math.hypot(e.clientX - downAt.x, e.clientY - downAt.y) < 4 && !e.shiftKey) ed.select([]);
+      } else if (input) ed.tools.up(input);
       downAt = null;
       setOrbit(true);
       if (el.hasPointerCapture(e.pointerId)) el.releasePointerCapture(e.pointerId);
