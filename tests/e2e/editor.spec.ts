@@ -147,3 +147,47 @@ test("enter a room, build a saw station with live checks, drag into the panel sp
   expect(reloaded).toBeCloseTo(afterUndo!, 6);
   await expect.poll(() => page.evaluate(() => window.__bwEditor!.doc.room.walls[0].lengthMm)).toBeCloseTo(6102.35, 1);
 });
+
+test("place by clicking a wall, nudge with the arrow keys, undo, and read the shortcut sheet", async ({ page }) => {
+  test.setTimeout(180_000);
+  await signIn(page);
+  await page.getByLabel("New plan").fill(`Clicks ${randomUUID().slice(0, 6)}`);
+  await page.getByRole("button", { name: "Create plan" }).click();
+  await expect(page).toHaveURL(/\/plans\/[0-9a-f-]{36}$/);
+  await expect.poll(() => page.evaluate(() => (window.__bwFrames ?? 0) > 2 && !!window.__bwScreen), { timeout: 30_000 }).toBe(true);
+  await page.getByRole("button", { name: "Plan", exact: true }).click();
+  await page.waitForTimeout(700);
+
+  // Choose a workbench in the catalogue, then click near the middle of wall 3 (the back wall) in plan view.
+  await page.getByRole("button", { name: "Workbench" }).click();
+  const target = await page.evaluate(() => {
+    const w = (window.__bwEditor as unknown as { wall(id: string): { start: { x: number; y: number }; dir: { x: number; y: number }; inward: { x: number; y: number }; lengthMm: number } }).wall("w3");
+    const t = w.lengthMm / 2;
+    return window.__bwScreen!({ x: w.start.x + w.dir.x * t + w.inward.x * 100, y: w.start.y + w.dir.y * t + w.inward.y * 100, z: 0 });
+  });
+  await page.mouse.move(target.x, target.y);
+  await page.mouse.click(target.x, target.y);
+  await expect(page.getByTestId("outline-item")).toHaveCount(1);
+  const placed = await page.evaluate(() => window.__bwEditor!.doc.fixtures[0].placement);
+  expect(placed).toMatchObject({ mode: "wall", wallId: "w3" });
+
+  // Arrow keys nudge by the 1 in grid step (25.4 mm), Shift by 12 in (304.8 mm); undo steps back.
+  await page.getByTestId("plan-canvas").locator("canvas").focus();
+  await page.keyboard.press("ArrowRight");
+  await page.keyboard.press("Shift+ArrowRight");
+  const moved = await page.evaluate(() => window.__bwEditor!.doc.fixtures[0].placement.offsetMm!);
+  expect(moved - placed.offsetMm!).toBeCloseTo(25.4 + 304.8, 6);
+  await page.keyboard.press("Control+z");
+  const back = await page.evaluate(() => window.__bwEditor!.doc.fixtures[0].placement.offsetMm!);
+  expect(back - placed.offsetMm!).toBeCloseTo(25.4, 6);
+  await expect(page.getByTestId("announcer")).toContainText("Moved 1 fixture");
+
+  // The shortcut sheet lists the same commands as the toolbar.
+  await page.keyboard.press("Shift+?");
+  const sheet = page.getByRole("dialog", { name: "Keyboard shortcuts" });
+  await expect(sheet).toBeVisible();
+  await expect(sheet).toContainText("Undo");
+  await expect(sheet).toContainText("Frame the whole room");
+  await page.keyboard.press("Escape");
+  await expect(sheet).toBeHidden();
+});
