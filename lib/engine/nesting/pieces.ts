@@ -22,17 +22,28 @@ export interface SheetGroup {
   pieces: NestPiece[];
 }
 
-/** Group sheet-good parts by material and thickness and expand quantities into pieces. Sizes in mm. */
+/**
+ * How many layers of a sheet a part takes: a part thinner than its sheet is cut from it and planed or
+ * shimmed to size (one layer); a thicker one is glued up from layers (a doubled fence: two). A layer
+ * within 15% counts as whole, so 38.1 mm of 18 mm plywood is two layers, not three.
+ */
+export function layersOf(partThicknessMm: number, sheetThicknessMm: number | undefined): number {
+  if (!sheetThicknessMm || sheetThicknessMm <= 0) return 1;
+  return Math.max(1, Math.ceil(partThicknessMm / sheetThicknessMm - 0.15));
+}
+
+/** Group sheet-good parts by material (at the sheet's own thickness when known) and expand quantities and layers into pieces. Sizes in mm. */
 export function sheetGroups(parts: readonly Part[], materials: readonly Material[]): SheetGroup[] {
   const groups = new Map<string, SheetGroup>();
   for (const p of parts) {
     if (p.stock !== "sheet" || p.qty <= 0) continue;
+    const m = materials.find((x) => x.id === p.materialId);
+    const layers = layersOf(p.thicknessMm, m?.thicknessMm);
     // Thickness rounded to 0.1 mm so float noise (19.049999 vs 19.05) does not split a material.
-    const thick = Math.round(p.thicknessMm * 10) / 10;
+    const thick = Math.round((m?.thicknessMm ?? p.thicknessMm) * 10) / 10;
     const key = `${p.materialId}|${thick}`;
     let g = groups.get(key);
     if (!g) {
-      const m = materials.find((x) => x.id === p.materialId);
       const a = m?.sheetLengthMm ?? DEFAULT_SHEET_LENGTH_MM;
       const b = m?.sheetWidthMm ?? DEFAULT_SHEET_WIDTH_MM;
       g = {
@@ -46,7 +57,7 @@ export function sheetGroups(parts: readonly Part[], materials: readonly Material
       };
       groups.set(key, g);
     }
-    for (let i = 0; i < p.qty; i++) {
+    for (let i = 0; i < p.qty * layers; i++) {
       g.pieces.push({ key: `${p.id}#${i + 1}`, partId: p.id, name: p.name, lengthMm: p.lengthMm, widthMm: p.widthMm, grain: p.grain });
     }
   }

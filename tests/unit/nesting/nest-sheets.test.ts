@@ -12,7 +12,7 @@ import { isGuillotine, layoutProblems, rects } from "./verify";
 const KERF = 3.175;
 
 function sheetPart(id: string, lengthMm: number, widthMm: number, grain: Grain, qty = 1, materialId = "ply-18"): Part {
-  return { id, fixtureId: "f", name: id, qty, lengthMm, widthMm, thicknessMm: 18, materialId, stock: "sheet", grain, edges: [], joinery: [] };
+  return { id, fixtureId: "f", name: id, qty, lengthMm, widthMm, thicknessMm: TEST_MATERIALS.find((m) => m.id === materialId)?.thicknessMm ?? 18, materialId, stock: "sheet", grain, edges: [], joinery: [] };
 }
 
 /** Every invariant the brief asks for, on one result. */
