@@ -36,6 +36,16 @@ export function EditorShell({ plan }: { plan: PlanInit }) {
   useShortcuts(editor);
   return (
     <EditorProvider editor={editor}>
+      <EditorLayout plan={plan} editor={editor} saver={saver} api={api} />
+    </EditorProvider>
+  );
+}
+
+/** The parts tables and sheet maps need room: the left panel widens while the Parts tab is open. */
+function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnType<typeof useEditorSession>) {
+  const wide = useUi((s) => s.tab) === "parts";
+  return (
+    <>
       <div className="flex h-[calc(100vh-3.5rem)] min-h-[560px] flex-col bg-paper">
         <div className="flex flex-wrap items-center gap-x-4 gap-y-1 border-b border-walnut-100 px-3 py-2">
           <h1 className="text-lg font-semibold text-walnut-900">{plan.name}</h1>
@@ -46,7 +56,7 @@ export function EditorShell({ plan }: { plan: PlanInit }) {
           </div>
         </div>
         <RestoreBanner saver={saver} editor={editor} />
-        <div className="grid min-h-0 flex-1 grid-cols-1 lg:grid-cols-[330px_minmax(0,1fr)_300px]">
+        <div className={`grid min-h-0 flex-1 grid-cols-1 ${wide ? "lg:grid-cols-[minmax(560px,58%)_minmax(0,1fr)_260px]" : "lg:grid-cols-[330px_minmax(0,1fr)_300px]"}`}>
           <aside className="min-h-0 border-r border-walnut-100 bg-paper-deep/40" aria-label="Plan panels">
             <SidePanel
               tabs={[
@@ -82,6 +92,6 @@ export function EditorShell({ plan }: { plan: PlanInit }) {
         <ShortcutHelp />
         <ConflictDialog saver={saver} editor={editor} name={plan.name} />
       </div>
-    </EditorProvider>
+    </>
   );
 }
