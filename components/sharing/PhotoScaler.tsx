@@ -1,6 +1,8 @@
 "use client";
 
 import { useState, type MouseEvent } from "react";
+import { formatLength } from "@/lib/engine/units/format-length";
+import { parseLength } from "@/lib/engine/units/parse-length";
 import type { Photo } from "./photo-api";
 
 /**
@@ -9,7 +11,8 @@ import type { Photo } from "./photo-api";
  */
 export function PhotoScaler({ photo, unitsMm, onScale }: { photo: Photo; unitsMm: boolean; onScale: (s: NonNullable<Photo["scale"]>) => void }) {
   const [pts, setPts] = useState<{ x: number; y: number }[]>(photo.scale ? [{ x: photo.scale.ax, y: photo.scale.ay }, { x: photo.scale.bx, y: photo.scale.by }] : []);
-  const [dist, setDist] = useState(photo.scale ? String(unitsMm ? photo.scale.distanceMm : Math.round((photo.scale.distanceMm / 25.4) * 100) / 100) : "");
+  const units = unitsMm ? "mm" : "in";
+  const [dist, setDist] = useState(photo.scale ? formatLength(photo.scale.distanceMm, { units, precision: 32, unitMark: false }) : "");
   const w = photo.widthPx ?? 1;
   const h = photo.heightPx ?? 1;
 
@@ -19,8 +22,9 @@ export function PhotoScaler({ photo, unitsMm, onScale }: { photo: Photo; unitsMm
     setPts((old) => (old.length >= 2 ? [p] : [...old, p]));
   }
 
-  const value = Number(dist);
-  const ready = pts.length === 2 && value > 0;
+  // The same reading of typed lengths as everywhere else: fractions, feet and inches, metric.
+  const read = dist.trim() ? parseLength(dist, { units }) : null;
+  const ready = pts.length === 2 && read?.ok === true;
   return (
     <div className="flex flex-col gap-2">
       <div className="relative">
@@ -37,9 +41,10 @@ export function PhotoScaler({ photo, unitsMm, onScale }: { photo: Photo; unitsMm
         <span className="text-walnut-700">{pts.length < 2 ? `Click ${2 - pts.length} point${pts.length ? "" : "s"} a known distance apart.` : "Two points marked."}</span>
         <label className="flex flex-col">
           Distance ({unitsMm ? "mm" : "in"})
-          <input value={dist} onChange={(e) => setDist(e.target.value)} inputMode="decimal" className="w-28 rounded-md border border-walnut-300 bg-white px-2 py-1" />
+          <input value={dist} onChange={(e) => setDist(e.target.value)} aria-invalid={read?.ok === false} className="w-28 rounded-md border border-walnut-300 bg-white px-2 py-1" />
         </label>
-        <button disabled={!ready} onClick={() => onScale({ ax: pts[0].x, ay: pts[0].y, bx: pts[1].x, by: pts[1].y, distanceMm: unitsMm ? value : value * 25.4 })} className="rounded-md bg-walnut-700 px-3 py-1.5 font-medium text-paper disabled:opacity-40">
+        {read?.ok === false && <span role="alert" className="text-brick-700">{read.message}</span>}
+        <button disabled={!ready} onClick={() => onScale({ ax: pts[0].x, ay: pts[0].y, bx: pts[1].x, by: pts[1].y, distanceMm: read?.ok ? read.mm : 0 })} className="rounded-md bg-walnut-700 px-3 py-1.5 font-medium text-paper disabled:opacity-40">
           Set the scale
         </button>
         {photo.mmPerPx && <span className="text-walnut-500">{photo.mmPerPx.toFixed(2)} mm per pixel</span>}
