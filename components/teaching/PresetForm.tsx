@@ -3,6 +3,8 @@
 import { useState, type FormEvent } from "react";
 import { ApiError, api } from "@/components/plans/api";
 import { DEFAULT_RULE_NUMBERS, RULE_NUMBER_KEYS } from "@/lib/engine/checks/numbers";
+import { formatLength } from "@/lib/engine/units/format-length";
+import { parseLength } from "@/lib/engine/units/parse-length";
 
 export interface PresetRow {
   id: string;
@@ -12,10 +14,19 @@ export interface PresetRow {
   published: boolean;
 }
 
-const IN = 25.4;
 const isLength = (k: string) => k.endsWith("Mm");
 const label = (k: string) => k.replace(/Mm$/, "").replace(/([A-Z])/g, " $1").toLowerCase();
-const show = (k: string, v: number) => (isLength(k) ? String(Math.round((v / IN) * 1000) / 1000) : String(v));
+const show = (k: string, v: number) => (isLength(k) ? formatLength(v, { units: "in", precision: 32 }) : String(v));
+
+/** Reads one typed number: lengths as the engine reads any length (fractions, feet and inches, metric), the rest as plain numbers. */
+function readNumber(k: string, raw: string): { ok: true; value: number } | { ok: false; message: string } {
+  if (isLength(k)) {
+    const r = parseLength(raw, { units: "in" });
+    return r.ok ? { ok: true, value: r.mm } : r;
+  }
+  const n = Number(raw);
+  return Number.isFinite(n) ? { ok: true, value: n } : { ok: false, message: "Type a number." };
+}
 
 /** Create or edit a preset: only the numbers filled in are set; lengths are typed in inches and stored in mm. */
 export function PresetForm({ preset, onSaved }: { preset?: PresetRow; onSaved: () => void }) {
@@ -24,10 +35,16 @@ export function PresetForm({ preset, onSaved }: { preset?: PresetRow; onSaved: (
     e.preventDefault();
     const f = new FormData(e.currentTarget);
     const numbers: Record<string, number> = {};
+    const bad: Record<string, string> = {};
     for (const k of RULE_NUMBER_KEYS) {
       const raw = String(f.get(`n-${k}`) ?? "").trim();
-      if (raw !== "") numbers[k] = isLength(k) ? Number(raw) * IN : Number(raw);
+      if (raw === "") continue;
+      const read = readNumber(k, raw);
+      if (read.ok) numbers[k] = read.value;
+      else bad[`numbers.${k}`] = read.message;
     }
+    // Nothing is sent, and nothing typed is lost, until every number reads.
+    if (Object.keys(bad).length) return setErrors({ ...bad, _: "Some numbers could not be read." });
     const body = { name: f.get("name"), description: f.get("description") ?? "", published: f.get("published") === "on", numbers };
     try {
       await api(preset ? `/api/v1/presets/${preset.id}` : "/api/v1/presets", { method: preset ? "PUT" : "POST", body: JSON.stringify(body) });
@@ -52,11 +69,11 @@ export function PresetForm({ preset, onSaved }: { preset?: PresetRow; onSaved: (
         <input type="checkbox" name="published" defaultChecked={preset?.published} /> Published (students and other plans can adopt it)
       </label>
       <fieldset className="grid gap-2 text-sm sm:grid-cols-2">
-        <legend className="mb-1 font-medium">Numbers to set (blank keeps the default shown; lengths in inches)</legend>
+        <legend className="mb-1 font-medium">Numbers to set (blank keeps the default shown; lengths as on a tape: 42, 3&apos; 6&quot;, 1067 mm)</legend>
         {RULE_NUMBER_KEYS.map((k) => (
           <label key={k} className="flex flex-col">
             {label(k)}
-            <input name={`n-${k}`} inputMode="decimal" defaultValue={preset?.numbers[k] !== undefined ? show(k, preset.numbers[k]) : ""} placeholder={show(k, DEFAULT_RULE_NUMBERS[k])} className="rounded-md border border-walnut-300 px-2 py-1" />
+            <input name={`n-${k}`} defaultValue={preset?.numbers[k] !== undefined ? show(k, preset.numbers[k]) : ""} placeholder={show(k, DEFAULT_RULE_NUMBERS[k])} className="rounded-md border border-walnut-300 px-2 py-1" />
             {errors[`numbers.${k}`] && <span className="text-brick-700">{errors[`numbers.${k}`]}</span>}
           </label>
         ))}
