@@ -17,10 +17,11 @@ export APP_URL="${APP_URL:-http://localhost:$APP_PORT}" NEXTAUTH_URL="${NEXTAUTH
 ./node_modules/.bin/tsx scripts/check-env.ts
 migrate
 seed
-build_app .next
+DIST="${BW_DIST_DIR:-.next}"
+build_app "$DIST"
 start_services "${BW_SMTP_PORT:-54325}" "${BW_MAIL_HTTP_PORT:-54326}" "${BW_S3_PORT:-54327}"
 
-NODE_ENV=production ./node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" &
+BW_DIST_DIR="$DIST" NODE_ENV=production ./node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" &
 CHILD_PIDS+=($!)
 for _ in $(seq 1 100); do port_in_use "$APP_PORT" && break; sleep 0.2; done
 cat <<MSG
