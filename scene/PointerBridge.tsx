@@ -5,6 +5,7 @@ import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import type { PointerInput } from "@/lib/client/tools/types";
 import { useEditor } from "@/lib/client/react/EditorContext";
 import { aim, onLevel, onWallPlane, pickHit, wallNear } from "./pick";
+import { zoneUnderRay } from "./zone-hover";
 
 /**
  * Turns pointer events on the canvas into tool events in plan coordinates. Listens in the capture
@@ -46,12 +47,38 @@ export function PointerBridge() {
       return { point: { x: point.x, y: point.y }, hit, ...mods };
     };
 
+    // Zone hover: only while idle with no button held, at most once a frame, so drags never pay for it.
+    let hoverFrame = 0;
+    let hoverAt: { clientX: number; clientY: number } | null = null;
+    const clearHover = () => {
+      if (hoverFrame) cancelAnimationFrame(hoverFrame);
+      hoverFrame = 0;
+      hoverAt = null;
+      if (ed.ui.getState().hoveredZone) ed.ui.setState({ hoveredZone: null });
+    };
+    const hover = () => {
+      hoverFrame = 0;
+      const at = hoverAt;
+      if (!at || ed.ui.getState().tool !== "idle") return;
+      const id = zoneUnderRay(aim(at, el, camera), scene.getObjectByName("zones"), ed.derived.getState().findings);
+      const r = el.getBoundingClientRect();
+      const prev = ed.ui.getState().hoveredZone;
+      if (!id) {
+        if (prev) ed.ui.setState({ hoveredZone: null });
+        return;
+      }
+      const x = at.clientX - r.left;
+      const y = at.clientY - r.top;
+      if (prev?.id !== id || prev.x !== x || prev.y !== y) ed.ui.setState({ hoveredZone: { id, x, y, w: r.width, h: r.height } });
+    };
+
     const setOrbit = (on: boolean) => {
       if (controls) controls.enabled = on;
     };
 
     const down = (e: PointerEvent) => {
       if (e.button !== 0) return;
+      clearHover();
       const tool = ed.ui.getState().tool;
       const input = toInput(e, true);
       if (!input) return;
@@ -72,7 +99,15 @@ export function PointerBridge() {
 
     const move = (e: PointerEvent) => {
       const tool = ed.ui.getState().tool;
-      if (tool === "idle") return;
+      if (tool === "idle") {
+        if (e.buttons !== 0) {
+          clearHover();
+          return;
+        }
+        hoverAt = { clientX: e.clientX, clientY: e.clientY };
+        if (!hoverFrame) hoverFrame = requestAnimationFrame(hover);
+        return;
+      }
       const input = toInput(e, tool === "placing");
       if (input) ed.tools.move(input);
     };
@@ -92,7 +127,10 @@ export function PointerBridge() {
     el.addEventListener("pointermove", move);
     el.addEventListener("pointerup", up);
     el.addEventListener("pointercancel", up);
+    el.addEventListener("pointerleave", clearHover);
     return () => {
+      clearHover();
+      el.removeEventListener("pointerleave", clearHover);
       el.removeEventListener("pointerdown", down, { capture: true });
       el.removeEventListener("pointermove", move);
       el.removeEventListener("pointerup", up);

@@ -34,14 +34,14 @@ function patternTexture(kind: "hatch" | "dots"): CanvasTexture | null {
 
 const materials = new Map<string, MeshBasicMaterial>();
 
-/** One translucent material per state (and a faint one for large clear room zones), patterned for conflict and caution. */
-export function zoneMaterial(state: ZoneState, faint = false): MeshBasicMaterial {
-  const key = `${state}:${faint}`;
+/** One translucent material per state (and a faint one for large clear room zones, a stronger one under the pointer), patterned for conflict and caution. */
+export function zoneMaterial(state: ZoneState, faint = false, hovered = false): MeshBasicMaterial {
+  const key = `${state}:${faint}:${hovered}`;
   let m = materials.get(key);
   if (!m) {
     const st = zoneStyle[state];
     const map = st.pattern === "plain" ? null : patternTexture(st.pattern);
-    m = new MeshBasicMaterial({ color: new Color(st.colour), transparent: true, opacity: faint ? 0.06 : state === "clear" ? 0.18 : 0.4, depthWrite: false, side: DoubleSide, map });
+    m = new MeshBasicMaterial({ color: new Color(st.colour), transparent: true, opacity: hovered ? 0.6 : faint ? 0.06 : state === "clear" ? 0.18 : 0.4, depthWrite: false, side: DoubleSide, map });
     materials.set(key, m);
   }
   return m;

@@ -19,9 +19,20 @@ export interface Measurement {
 }
 
 /** Editor state that is not part of the document and is never undone. */
+/** The keep-clear zone under the pointer, and where the pointer is on the canvas (CSS px from its top left; w, h: the canvas size). */
+export interface ZoneHover {
+  id: string;
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+
 export interface UiState {
   selection: string[];
   hovered: string | null;
+  /** Set only while idle (never during a drag), so hovering costs nothing while moving fixtures. */
+  hoveredZone: ZoneHover | null;
   view: ViewMode;
   /** The wall shown in elevation view. */
   elevationWallId: string | null;
@@ -49,6 +60,7 @@ export function createUiStore(init: Partial<UiState> = {}) {
   return createStore<UiState>()(() => ({
     selection: [],
     hovered: null,
+    hoveredZone: null,
     view: "orbit",
     elevationWallId: null,
     frameRequest: { ids: [], n: 0 },
