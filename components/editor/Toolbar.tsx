@@ -2,7 +2,8 @@
 import { getCommand, run } from "@/lib/client/commands/registry";
 import { describeChord } from "@/lib/client/commands/shortcuts";
 import { useEditor } from "@/lib/client/react/EditorContext";
-import { useHistoryFlags, useUi } from "@/lib/client/react/useEditorState";
+import { useDoc, useHistoryFlags, useUi } from "@/lib/client/react/useEditorState";
+import { gridStepFor } from "@/lib/client/store/grid-steps";
 import { Icon } from "./icons";
 
 const isMac = () => typeof navigator !== "undefined" && /Mac|iPhone|iPad/.test(navigator.platform);
@@ -27,6 +28,30 @@ function CommandButton({ name, icon, pressed, disabled }: { name: string; icon: 
   );
 }
 
+/** The grid step in force, in the plan's units, beside the snapping button; a press switches fine and normal steps. */
+function GridStep() {
+  const ed = useEditor();
+  const settings = useDoc((d) => d.settings);
+  const size = useUi((s) => s.gridSize);
+  const snapping = useUi((s) => s.snapping);
+  const f = (mm: number) => ed.engine.formatLength(mm, settings);
+  const step = f(gridStepFor(settings.units, size));
+  const big = f(gridStepFor(settings.units, size, true));
+  return (
+    <button
+      type="button"
+      data-testid="grid-step"
+      className="rounded px-1.5 py-1 text-xs tabular-nums text-walnut-700 hover:bg-walnut-100 focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-amberline-500 aria-pressed:bg-walnut-100"
+      aria-pressed={size === "fine"}
+      aria-label={`Grid step ${step}, Shift ${big}${snapping ? "" : " (snapping off)"}. Fine grid on/off`}
+      title={`Grid step ${step} (Shift: ${big}). Fine grid on/off (Shift+G)`}
+      onClick={() => run(ed, "toggle-fine-grid")}
+    >
+      <span className={snapping ? "" : "line-through"}>Grid {step}</span>
+    </button>
+  );
+}
+
 /** The editor's buttons; each is a registered command, so labels and shortcuts match the keyboard and the help sheet. */
 export function Toolbar() {
   const { canUndo, canRedo } = useHistoryFlags();
@@ -45,6 +70,7 @@ export function Toolbar() {
       <CommandButton name="tool-select" icon="select" pressed={tool === "idle" || tool === "pointing" || tool === "dragging"} />
       <CommandButton name="tool-measure" icon="tape" pressed={tool === "measuring"} />
       <CommandButton name="toggle-snap" icon="snap" pressed={snapping} />
+      <GridStep />
       {sep}
       <CommandButton name="duplicate" icon="duplicate" disabled={!hasSel} />
       <CommandButton name="delete" icon="delete" disabled={!hasSel} />

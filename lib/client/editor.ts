@@ -4,6 +4,7 @@ import type { FixtureDoc, PlanDocument } from "@/lib/engine/plan/schema";
 import { createDerivedStore, recompute, type Analyser, type DerivedStore } from "./derived/derived-store";
 import type { EnginePort } from "./engine-port";
 import { createPlanStore, PlanHistory, type DocRecipe } from "./store/plan-store";
+import { gridStepFor } from "./store/grid-steps";
 import { createUiStore, type UiState, type UiStore } from "./store/ui-store";
 import { ToolController } from "./tools/controller";
 
@@ -87,6 +88,11 @@ export class Editor {
     if (p) return p.footprint;
     const f = this.fixture(id);
     return f ? this.engine.footprint(f.kind, f.params, this.doc) : undefined;
+  }
+
+  /** The grid step in force for dragging, placing and nudging, mm (`big`: the Shift step). It follows the plan's units. */
+  gridStepMm(big = false): number {
+    return gridStepFor(this.doc.settings.units, this.ui.getState().gridSize, big);
   }
 
   formatLength(mm: number): string {

@@ -171,12 +171,13 @@ test("place by clicking a wall, nudge with the arrow keys, undo, and read the sh
   const placed = await page.evaluate(() => window.__bwEditor!.doc.fixtures[0].placement);
   expect(placed).toMatchObject({ mode: "wall", wallId: "w3" });
 
-  // Arrow keys nudge by the 1 in grid step (25.4 mm), Shift by 12 in (304.8 mm); undo steps back.
+  // Arrow keys nudge by the 1 in grid step (25.4 mm), Shift by 6 in (152.4 mm); undo steps back (1 in = 25.4 mm, NIST SP 811).
   await page.getByTestId("plan-canvas").locator("canvas").focus();
   await page.keyboard.press("ArrowRight");
   await page.keyboard.press("Shift+ArrowRight");
   const moved = await page.evaluate(() => window.__bwEditor!.doc.fixtures[0].placement.offsetMm!);
-  expect(moved - placed.offsetMm!).toBeCloseTo(25.4 + 304.8, 6);
+  expect(moved - placed.offsetMm!).toBeCloseTo(25.4 + 152.4, 6);
+  await expect(page.getByTestId("grid-step")).toHaveText('Grid 1"');
   await page.keyboard.press("Control+z");
   const back = await page.evaluate(() => window.__bwEditor!.doc.fixtures[0].placement.offsetMm!);
   expect(back - placed.offsetMm!).toBeCloseTo(25.4, 6);

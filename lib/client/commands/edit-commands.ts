@@ -30,7 +30,7 @@ export const editCommands: Command[] = [
     perform: (ed) => {
       const ids = ed.selection;
       // Shift the copy by the first fixture's width so it lands beside the original.
-      const shift = ed.footprint(ids[0])?.widthMm ?? ed.ui.getState().bigStepMm;
+      const shift = ed.footprint(ids[0])?.widthMm ?? ed.gridStepMm(true);
       let made: string[] = [];
       ed.edit((doc) => {
         const r = duplicateFixtures(doc, ids, shift, () => newId("fx"));
@@ -73,6 +73,17 @@ export const editCommands: Command[] = [
       const snapping = !ed.ui.getState().snapping;
       ed.ui.setState({ snapping });
       ed.announce(snapping ? "Snapping on." : "Snapping off.");
+    },
+  },
+  {
+    name: "toggle-fine-grid",
+    label: "Fine grid on/off",
+    group: "tools",
+    shortcuts: ["Shift+G"],
+    perform: (ed) => {
+      const gridSize = ed.ui.getState().gridSize === "fine" ? "normal" : "fine";
+      ed.ui.setState({ gridSize });
+      ed.announce(`Grid step ${ed.formatLength(ed.gridStepMm())}.`);
     },
   },
   { name: "tool-select", label: "Select tool", group: "tools", shortcuts: ["V"], perform: (ed) => ed.tools.go(createIdle()) },

@@ -1,32 +1,27 @@
-import type { Placement, PlanDocument } from "@/lib/engine/plan/schema";
+import type { PlanDocument } from "@/lib/engine/plan/schema";
 import type { Editor } from "../editor";
 import { setPlacement } from "../store/fixture-ops";
+import { groupMembers, moveGroup } from "../tools/group-move";
 
 /**
- * Moves a placement by a step. Against a wall, left/right slide along it (from its start toward
- * its end) and up/down raise or lower it; free, the four keys move it on the floor plan.
+ * Nudges every selected fixture by (dx, dy) grid steps (or big steps): one undo step. The first
+ * selected fixture sets the direction: against a wall, left/right run along its wall and up/down
+ * raise or lower what stands against walls; free, the keys move on the floor plan. The others move
+ * like a drag: free fixtures by the same floor vector, wall fixtures along their own wall by its share.
  */
-export function nudgePlacement(p: Placement, dx: number, dy: number, wallLengthMm?: number, widthMm = 0): Placement {
-  if (p.mode === "free") return { ...p, xMm: p.xMm + dx, yMm: p.yMm + dy };
-  let offsetMm = p.offsetMm + dx;
-  if (wallLengthMm !== undefined) offsetMm = Math.min(Math.max(0, wallLengthMm - widthMm), Math.max(0, offsetMm));
-  return { ...p, offsetMm, elevationMm: Math.max(0, p.elevationMm + dy) };
-}
-
-/** Nudges every selected fixture by (dx, dy) steps of the grid (or the big step): one undo step. */
 export function nudgeSelection(ed: Editor, dx: number, dy: number, big: boolean): void {
-  const ui = ed.ui.getState();
-  const step = big ? ui.bigStepMm : ui.gridStepMm;
+  const step = ed.gridStepMm(big);
   const ids = ed.selection;
   if (ids.length === 0) return;
+  const lead = ed.fixture(ids[0])?.placement;
+  const leadWall = lead?.mode === "wall" ? ed.wall(lead.wallId) : undefined;
+  const members = groupMembers(ed, ids);
+  const raise = !!leadWall && dy !== 0;
+  const v = leadWall ? { x: leadWall.dir.x * dx * step, y: leadWall.dir.y * dx * step } : { x: dx * step, y: dy * step };
   const changed = ed.edit((doc) => {
+    if (!raise) return moveGroup(doc, members, (id) => ed.wall(id), v);
     let next: PlanDocument = doc;
-    for (const id of ids) {
-      const f = next.fixtures.find((x) => x.id === id);
-      if (!f) continue;
-      const wall = f.placement.mode === "wall" ? ed.wall(f.placement.wallId) : undefined;
-      next = setPlacement(next, id, nudgePlacement(f.placement, dx * step, dy * step, wall?.lengthMm, ed.footprint(id)?.widthMm));
-    }
+    for (const m of members) next = setPlacement(next, m.id, { ...m.start, elevationMm: Math.max(0, m.start.elevationMm + dy * step) });
     return next;
   });
   if (changed) {

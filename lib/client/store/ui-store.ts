@@ -1,6 +1,7 @@
 import { createStore } from "zustand/vanilla";
 import type { Vec2 } from "@/lib/engine/geometry/types";
 import type { Placement } from "@/lib/engine/plan/schema";
+import type { GridSize } from "./grid-steps";
 
 export type ViewMode = "orbit" | "plan" | "elevation";
 export type PanelTab = "room" | "layout" | "checks" | "parts" | "history";
@@ -38,10 +39,8 @@ export interface UiState {
   elevationWallId: string | null;
   /** Bumped to ask the camera to frame these fixtures (empty: the whole room). */
   frameRequest: { ids: string[]; n: number };
-  /** Grid step for dragging and nudging, mm. */
-  gridStepMm: number;
-  /** The larger step (Shift), mm. */
-  bigStepMm: number;
+  /** Fine or normal grid; the steps themselves follow the plan's units (grid-steps.ts). */
+  gridSize: GridSize;
   snapping: boolean;
   /** Draw every keep-clear zone, not only failing ones, the room's and the selection's. */
   showAllZones: boolean;
@@ -64,8 +63,7 @@ export function createUiStore(init: Partial<UiState> = {}) {
     view: "orbit",
     elevationWallId: null,
     frameRequest: { ids: [], n: 0 },
-    gridStepMm: 25.4,
-    bigStepMm: 304.8,
+    gridSize: "normal",
     snapping: true,
     showAllZones: false,
     tool: "idle",

@@ -21,14 +21,14 @@ export function placementFor(ed: Editor, kind: string, params: Record<string, un
       widthMm: fp.widthMm,
       wallLengthMm: wall.lengthMm,
       neighbours: wallSpans(ed, wall.id, new Set()),
-      gridStepMm: ui.gridStepMm,
+      gridStepMm: ed.gridStepMm(),
       thresholdMm: SNAP_THRESHOLD_MM,
       enabled: snap,
     });
     return { mode: "wall", wallId: wall.id, offsetMm, elevationMm: 0 };
   }
   if (input.hit?.type === "floor") {
-    const g = (v: number) => (snap ? snapToGrid(v, ui.gridStepMm) : v);
+    const g = (v: number) => (snap ? snapToGrid(v, ed.gridStepMm()) : v);
     return { mode: "free", xMm: g(input.point.x - fp.widthMm / 2), yMm: g(input.point.y - fp.depthMm / 2), rotationDeg: 0, elevationMm: 0 };
   }
   return null;

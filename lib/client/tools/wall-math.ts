@@ -25,3 +25,9 @@ export function nearestWall(walls: readonly SolvedWall[], p: Vec2, maxMm = Infin
   }
   return best;
 }
+
+/** Distance of a floor point from a wall's segment (not its endless line), mm. */
+export function distanceToWall(wall: SolvedWall, p: Vec2): number {
+  const t = Math.max(0, Math.min(wall.lengthMm, alongWall(wall, p)));
+  return Math.hypot(wall.start.x + wall.dir.x * t - p.x, wall.start.y + wall.dir.y * t - p.y);
+}

@@ -74,7 +74,8 @@ export function roomDoc(): PlanDocument {
 }
 
 export function makeEditor(doc = roomDoc(), engine: EnginePort = stubEngine): Editor {
-  return new Editor({ doc, engine, ui: { gridStepMm: 10, bigStepMm: 100 } });
+  // A metric plan: grid steps 1 mm fine, 10 mm normal, 100 mm with Shift (grid-steps.ts).
+  return new Editor({ doc, engine });
 }
 
 /** A pointer on wall w1 (along +x from the origin) at `x` mm, a little into the room. */

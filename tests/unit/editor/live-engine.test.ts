@@ -64,7 +64,7 @@ describe("snapping to what a fixture really occupies", () => {
     const { alongWall } = await import("@/lib/client/tools/wall-math");
     const ed = new Editor({ doc: newPlanDocument(), engine: liveEngine });
     const id = place(ed, "base-cabinet", 600);
-    ed.ui.setState({ snapping: true, gridStepMm: 25.4 });
+    ed.ui.setState({ snapping: true, gridSize: "normal" });
     const wall = ed.wall("w3")!;
     const at = (t: number) => ({ x: wall.start.x + wall.dir.x * t + wall.inward.x * 300, y: wall.start.y + wall.dir.y * t + wall.inward.y * 300 });
     ed.tools.down({ point: at(900), hit: { type: "fixture", id } });
