@@ -5,13 +5,10 @@ import { useUi } from "@/lib/client/react/useEditorState";
 import { Catalogue } from "./Catalogue";
 import { FindingsList } from "./FindingsList";
 import { OutlineList } from "./OutlineList";
-import { PartsTab } from "./PartsTab";
 import { PropertiesPanel } from "./PropertiesPanel";
-import { RevisionsPanel } from "./RevisionsPanel";
 import { RoomForm } from "./RoomForm";
 import { ConflictDialog, RestoreBanner } from "./SaveDialogs";
 import { SaveIndicator } from "./SaveIndicator";
-import { ShortcutHelp } from "./ShortcutHelp";
 import { SidePanel } from "./SidePanel";
 import { Toolbar } from "./Toolbar";
 import { useEditorSession, type PlanInit } from "./useEditorSession";
@@ -20,6 +17,11 @@ import { ViewBar } from "./ViewBar";
 import { ZoneLegend } from "./ZoneLegend";
 
 const EditorCanvas = dynamic(() => import("@/scene/EditorCanvas"), { ssr: false, loading: () => <p className="p-6 text-walnut-500">Loading the 3D view…</p> });
+// Opened on demand, so they load when first shown rather than with the page: the Parts tab brings
+// the parts tables, sheet nesting and shopping list; History and the shortcut sheet are rarely open.
+const PartsTab = dynamic(() => import("./PartsTab").then((m) => m.PartsTab), { loading: () => <p className="text-sm text-walnut-500">Loading the parts…</p> });
+const RevisionsPanel = dynamic(() => import("./RevisionsPanel").then((m) => m.RevisionsPanel), { loading: () => <p className="text-sm text-walnut-500">Loading the history…</p> });
+const ShortcutHelp = dynamic(() => import("./ShortcutHelp").then((m) => m.ShortcutHelp));
 
 function Announcer() {
   const text = useUi((s) => s.announcement);
@@ -44,6 +46,7 @@ export function EditorShell({ plan }: { plan: PlanInit }) {
 /** The parts tables and sheet maps need room: the left panel widens while the Parts tab is open. */
 function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnType<typeof useEditorSession>) {
   const wide = useUi((s) => s.tab) === "parts";
+  const helpOpen = useUi((s) => s.helpOpen);
   return (
     <>
       <div className="flex h-[calc(100vh-3.5rem)] min-h-[560px] flex-col bg-paper">
@@ -89,7 +92,7 @@ function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnT
           </aside>
         </div>
         <Announcer />
-        <ShortcutHelp />
+        {helpOpen ? <ShortcutHelp /> : null}
         <ConflictDialog saver={saver} editor={editor} name={plan.name} />
       </div>
     </>
