@@ -1,7 +1,6 @@
 import type { Vec2 } from "../geometry/types";
 import type { CheckContext, SolidItem } from "./context";
-import { expandBounds, polygonBounds } from "./geom/polygon";
-import { firstHitConvex, firstHitSegment, fromStrip, stripPolygon, type Strip } from "./geom/strip";
+import { firstHitConvex, firstHitSegment, fromStrip, stripBounds, type Strip } from "./geom/strip";
 
 /** What stops a run: a fixture, an obstacle, a wall, or a closed door in a wall. */
 export interface Blocker {
@@ -22,8 +21,8 @@ export interface RunOptions {
   /** Only bodies overlapping this height band block (mm above the floor). */
   zLo: number;
   zHi: number;
-  /** Ids of solids that never block (the owner, say). */
-  exclude?: ReadonlySet<string>;
+  /** The id of a solid that never blocks (the owner). */
+  excludeId?: string;
   /** Extra filter: return false to let a solid through. */
   blocks?: (s: SolidItem) => boolean;
   /** Count walls (true by default). */
@@ -36,9 +35,8 @@ const OPENING_NAMES: Record<string, string> = { "entry-door": "the closed entry 
 export function clearRun(ctx: CheckContext, strip: Strip, o: RunOptions): RunResult {
   let best = strip.length;
   let blocker: Blocker | undefined;
-  const q = expandBounds(polygonBounds(stripPolygon(strip)), 1);
-  for (const s of ctx.solids.query(q)) {
-    if (o.exclude?.has(s.id)) continue;
+  for (const s of ctx.solids.query(stripBounds(strip, 1))) {
+    if (s.id === o.excludeId) continue;
     if (s.prism.zMax <= o.zLo || s.prism.zMin >= o.zHi) continue;
     if (o.blocks && !o.blocks(s)) continue;
     const d = firstHitConvex(strip, s.prism.polygon);

@@ -10,6 +10,8 @@ import { GridIndex } from "./spatial/grid-index";
 /** Something solid in the room: a fixture's body or an obstacle's. */
 export interface SolidItem {
   id: string;
+  /** Index key: source and id. */
+  key: string;
   source: "fixture" | "obstacle";
   kind: string;
   label: string;
@@ -59,30 +61,50 @@ const SOLIDS = new WeakMap<PlacedFixture, SolidItem>();
 export function fixtureSolid(f: PlacedFixture): SolidItem {
   let s = SOLIDS.get(f);
   if (!s) {
-    s = { id: f.id, source: "fixture", kind: f.kind, label: f.label || f.kind, prism: f.body, bounds: polygonBounds(f.body.polygon), fixture: f };
+    s = { id: f.id, key: `fixture:${f.id}`, source: "fixture", kind: f.kind, label: f.label || f.kind, prism: f.body, bounds: polygonBounds(f.body.polygon), fixture: f };
     SOLIDS.set(f, s);
   }
   return s;
 }
 
 export function obstacleSolid(o: PlacedObstacle): SolidItem {
-  return { id: o.id, source: "obstacle", kind: o.kind, label: o.kind.replace(/-/g, " "), prism: o.body, bounds: polygonBounds(o.body.polygon), obstacle: o };
+  return { id: o.id, key: `obstacle:${o.id}`, source: "obstacle", kind: o.kind, label: o.kind.replace(/-/g, " "), prism: o.body, bounds: polygonBounds(o.body.polygon), obstacle: o };
 }
 
 const NOT_SOLID = new Set(["parking-bay", "outlet"]);
 
-export const solidKey = (s: { id: string; source: string }) => `${s.source}:${s.id}`;
-export const zoneItem = (z: WorldZone): ZoneItem => ({ zone: z, bounds: polygonBounds(z.prism.polygon) });
+const ZONES = new WeakMap<WorldZone, ZoneItem>();
 
-/** Length formatter with a small cache: the same few lengths (36 in, 8 ft...) recur in hundreds of messages. */
-function memoLen(settings: PlanDocument["settings"]): (v: number) => string {
-  const cache = new Map<number, string>();
+/** The index entry for a zone (one per zone object: unchanged fixtures keep their zones across re-derives). */
+export function zoneItem(z: WorldZone): ZoneItem {
+  let item = ZONES.get(z);
+  if (!item) {
+    item = { zone: z, bounds: polygonBounds(z.prism.polygon) };
+    ZONES.set(z, item);
+  }
+  return item;
+}
+
+/** Formatted lengths per settings object: the same few lengths (36 in, 8 ft...) recur in hundreds of messages, and edits keep the settings object. */
+const LENGTHS = new WeakMap<object, Map<number, string>>();
+const FINE_LENGTHS = new WeakMap<object, Map<number, string>>();
+
+/** Length formatter with a cache shared by every evaluation under the same settings object; `fine` writes to 1/32 in. */
+function memoLen(settings: PlanDocument["settings"], fine: boolean): (v: number) => string {
+  const caches = fine ? FINE_LENGTHS : LENGTHS;
+  const fmt = fine ? { ...settings, precision: 32 } : settings;
+  let cache = caches.get(settings);
+  if (!cache) {
+    cache = new Map();
+    caches.set(settings, cache);
+  }
+  const c = cache;
   return (v) => {
     const k = Math.round(v * 100);
-    let t = cache.get(k);
+    let t = c.get(k);
     if (t === undefined) {
-      t = formatLengthFor(v, settings);
-      if (cache.size < 4096) cache.set(k, t);
+      t = formatLengthFor(v, fmt);
+      if (c.size < 4096) c.set(k, t);
     }
     return t;
   };
@@ -93,21 +115,32 @@ export function buildContext(plan: PlanDocument, derived: Derived, opts: Evaluat
   const numbers = resolveNumbers(plan, opts.preset);
   const presetSet = presetKeys(opts.preset);
   const presetLabel = opts.presetLabel ?? "class preset";
-  const solids = new GridIndex<SolidItem>(opts.cellMm ?? 1000);
-  const zoneIndex = new GridIndex<ZoneItem>(opts.cellMm ?? 1000);
   const fixtureById = new Map<string, PlacedFixture>();
+  const solidKeys: string[] = [];
+  const solidBounds: Bounds2[] = [];
+  const solidItems: SolidItem[] = [];
+  const addSolid = (s: SolidItem) => {
+    solidKeys.push(s.key);
+    solidBounds.push(s.bounds);
+    solidItems.push(s);
+  };
   for (const f of derived.fixtures) {
     fixtureById.set(f.id, f);
-    const s = fixtureSolid(f);
-    solids.insert(solidKey(s), s.bounds, s);
+    addSolid(fixtureSolid(f));
   }
-  for (const o of derived.obstacles) {
-    // A parking bay is its zones (vehicle, doors); an outlet sits in the wall. Neither is a solid.
-    if (NOT_SOLID.has(o.kind)) continue;
-    const s = obstacleSolid(o);
-    solids.insert(solidKey(s), s.bounds, s);
+  // A parking bay is its zones (vehicle, doors); an outlet sits in the wall. Neither is a solid.
+  for (const o of derived.obstacles) if (!NOT_SOLID.has(o.kind)) addSolid(obstacleSolid(o));
+  const zoneKeys: string[] = [];
+  const zoneBounds: Bounds2[] = [];
+  const zoneItems: ZoneItem[] = [];
+  for (const z of derived.zones) {
+    const item = zoneItem(z);
+    zoneKeys.push(z.id);
+    zoneBounds.push(item.bounds);
+    zoneItems.push(item);
   }
-  for (const z of derived.zones) zoneIndex.insert(z.id, polygonBounds(z.prism.polygon), zoneItem(z));
+  const solids = GridIndex.build(solidKeys, solidBounds, solidItems, opts.cellMm ?? 1000);
+  const zoneIndex = GridIndex.build(zoneKeys, zoneBounds, zoneItems, opts.cellMm ?? 1000);
   const settings = plan.settings;
   return {
     ...derived,
@@ -119,8 +152,8 @@ export function buildContext(plan: PlanDocument, derived: Derived, opts: Evaluat
     zoneIndex,
     fixtureById,
     roomPolygon: derived.room.corners,
-    len: memoLen(settings),
-    lenFine: memoLen({ ...settings, precision: 32 }),
+    len: memoLen(settings, false),
+    lenFine: memoLen(settings, true),
     presetNote: (...keys) => (keys.some((k) => presetSet.has(k)) ? ` (${presetLabel})` : ""),
   };
 }

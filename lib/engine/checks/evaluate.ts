@@ -2,7 +2,7 @@ import type { Derived } from "../derive-types";
 import type { PlacedFixture } from "../fixtures/types";
 import type { Bounds2 } from "../geometry/types";
 import type { PlanDocument } from "../plan/schema";
-import { buildContext, fixtureSolid, solidKey, zoneItem, type CheckContext, type EvaluateOptions } from "./context";
+import { buildContext, fixtureSolid, zoneItem, type CheckContext, type EvaluateOptions } from "./context";
 import { boundsOverlap, expandBounds, polygonBounds, unionBounds } from "./geom/polygon";
 import { isMiterStation } from "./kinds";
 import { RULES } from "./registry";
@@ -102,14 +102,17 @@ export function createChecker(plan: PlanDocument, derived: Derived, opts: Evalua
       for (const id of changed) {
         const before = oldCtx.fixtureById.get(id);
         if (before) {
-          oldCtx.solids.remove(solidKey({ id, source: "fixture" }));
+          oldCtx.solids.remove(fixtureSolid(before).key);
           for (const z of before.zones) oldCtx.zoneIndex.remove(z.id);
         }
         const after = nextById.get(id);
         if (after) {
           const s = fixtureSolid(after);
-          oldCtx.solids.insert(solidKey(s), s.bounds, s);
-          for (const z of after.zones) oldCtx.zoneIndex.insert(z.id, polygonBounds(z.prism.polygon), zoneItem(z));
+          oldCtx.solids.insert(s.key, s.bounds, s);
+          for (const z of after.zones) {
+            const item = zoneItem(z);
+            oldCtx.zoneIndex.insert(z.id, item.bounds, item);
+          }
         }
       }
       ctx = { ...oldCtx, ...nextDerived, plan: nextPlan, fixtureById: nextById, roomPolygon: nextDerived.room.corners };

@@ -97,4 +97,50 @@ describe("uniform grid index", () => {
     }
     expect(g.size).toBe(300 - 34);
   });
+
+  it("a packed build answers like a brute-force scan, through removals, re-inserts and far-off items", () => {
+    let s = 11;
+    const rnd = () => ((s = (s * 1103515245 + 12345) % 2147483648) / 2147483648);
+    const boxes = new Map<string, { minX: number; minY: number; maxX: number; maxY: number }>();
+    for (let i = 0; i < 400; i++) {
+      const x = rnd() * 20000 - 5000;
+      const y = rnd() * 20000 - 5000;
+      boxes.set(`b${i}`, { minX: x, minY: y, maxX: x + rnd() * 2500, maxY: y + rnd() * 2500 });
+    }
+    // An item a kilometre away must not blow the packed arrays up, and still be found.
+    boxes.set("far", { minX: 1e6, minY: 1e6, maxX: 1e6 + 500, maxY: 1e6 + 500 });
+    const g = GridIndex.build([...boxes.keys()], [...boxes.values()], [...boxes.keys()], 1000);
+    expect(g.size).toBe(401);
+    expect(g.get("b7")).toBe("b7");
+    for (let i = 0; i < 400; i += 5) {
+      g.remove(`b${i}`);
+      boxes.delete(`b${i}`);
+    }
+    // Moved items come back under the same key at new bounds.
+    for (let i = 1; i < 400; i += 7) {
+      const x = rnd() * 20000 - 5000;
+      const b = { minX: x, minY: x, maxX: x + 900, maxY: x + 900 };
+      g.insert(`b${i}`, b, `b${i}`);
+      boxes.set(`b${i}`, b);
+    }
+    expect(g.size).toBe(boxes.size);
+    const probes = [{ minX: 1e6 - 10, minY: 1e6 - 10, maxX: 1e6 + 10, maxY: 1e6 + 10 }];
+    for (let q = 0; q < 80; q++) {
+      const x = rnd() * 22000 - 6000;
+      const y = rnd() * 22000 - 6000;
+      probes.push({ minX: x, minY: y, maxX: x + rnd() * 3000, maxY: y + rnd() * 3000 });
+    }
+    for (const qb of probes) {
+      const brute = [...boxes].filter(([, b]) => b.minX <= qb.maxX && qb.minX <= b.maxX && b.minY <= qb.maxY && qb.minY <= b.maxY).map(([k]) => k).sort();
+      expect(g.query(qb).sort()).toEqual(brute);
+    }
+    expect(g.query(probes[0])).toEqual(["far"]);
+  });
+
+  it("items without finite bounds (an empty outline) are kept and do not break the packed grid", () => {
+    const g = GridIndex.build(["a", "empty", "b"], [{ minX: 0, minY: 0, maxX: 10, maxY: 10 }, { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity }, { minX: 500, minY: 500, maxX: 600, maxY: 600 }], ["a", "empty", "b"], 100);
+    expect(g.size).toBe(3);
+    expect(g.query({ minX: -5, minY: -5, maxX: 550, maxY: 550 }).sort()).toEqual(["a", "b"]);
+    expect(g.get("empty")).toBe("empty");
+  });
 });

@@ -29,15 +29,36 @@ export function unionBounds(a: Bounds2, b: Bounds2): Bounds2 {
   return { minX: Math.min(a.minX, b.minX), minY: Math.min(a.minY, b.minY), maxX: Math.max(a.maxX, b.maxX), maxY: Math.max(a.maxY, b.maxY) };
 }
 
-function projectOn(poly: readonly Vec2[], ax: number, ay: number): [number, number] {
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (const p of poly) {
-    const d = p.x * ax + p.y * ay;
-    if (d < lo) lo = d;
-    if (d > hi) hi = d;
+/** Smallest overlap of the two polygons' projections on the edge normals of `edges`, mm (Infinity when it has no edges). */
+function minOverlapOnNormals(edges: readonly Vec2[], a: readonly Vec2[], b: readonly Vec2[], best: number): number {
+  const n = edges.length;
+  for (let i = 0; i < n; i++) {
+    const p = edges[i];
+    const q = edges[(i + 1) % n];
+    const ex = q.x - p.x;
+    const ey = q.y - p.y;
+    const len = Math.hypot(ex, ey);
+    if (len < 1e-9) continue;
+    const ax = -ey / len;
+    const ay = ex / len;
+    let alo = Infinity;
+    let ahi = -Infinity;
+    for (const v of a) {
+      const d = v.x * ax + v.y * ay;
+      if (d < alo) alo = d;
+      if (d > ahi) ahi = d;
+    }
+    let blo = Infinity;
+    let bhi = -Infinity;
+    for (const v of b) {
+      const d = v.x * ax + v.y * ay;
+      if (d < blo) blo = d;
+      if (d > bhi) bhi = d;
+    }
+    const overlap = Math.min(ahi, bhi) - Math.max(alo, blo);
+    if (overlap < best) best = overlap;
   }
-  return [lo, hi];
+  return best;
 }
 
 /**
@@ -46,23 +67,7 @@ function projectOn(poly: readonly Vec2[], ax: number, ay: number): [number, numb
  * along the best separating axis).
  */
 export function convexPenetration(a: readonly Vec2[], b: readonly Vec2[]): number {
-  let best = Infinity;
-  for (const poly of [a, b]) {
-    for (let i = 0; i < poly.length; i++) {
-      const p = poly[i];
-      const q = poly[(i + 1) % poly.length];
-      const ex = q.x - p.x;
-      const ey = q.y - p.y;
-      const len = Math.hypot(ex, ey);
-      if (len < 1e-9) continue;
-      const ax = -ey / len;
-      const ay = ex / len;
-      const [alo, ahi] = projectOn(a, ax, ay);
-      const [blo, bhi] = projectOn(b, ax, ay);
-      const overlap = Math.min(ahi, bhi) - Math.max(alo, blo);
-      if (overlap < best) best = overlap;
-    }
-  }
+  const best = minOverlapOnNormals(b, a, b, minOverlapOnNormals(a, a, b, Infinity));
   return best === Infinity ? 0 : best;
 }
 

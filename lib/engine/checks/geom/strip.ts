@@ -1,5 +1,4 @@
-import type { Vec2 } from "../../geometry/types";
-import { centroid } from "./polygon";
+import type { Bounds2, Vec2 } from "../../geometry/types";
 
 /**
  * A straight band on the floor: from `origin` along unit vector `u` for `length` mm, between
@@ -24,38 +23,55 @@ export function makeStrip(origin: Vec2, dir: Vec2, widthMm: number, length: numb
 
 /** The strip that runs through a rectangular zone away from `from` (the owner's centre). */
 export function stripThroughZone(zone: readonly Vec2[], from: Vec2): Strip {
-  const c = centroid(zone);
-  const away = { x: c.x - from.x, y: c.y - from.y };
-  let u = { x: 1, y: 0 };
+  // Scalars in the loops: this runs for every zone of every fixture.
+  let cx = 0;
+  let cy = 0;
+  for (const p of zone) {
+    cx += p.x;
+    cy += p.y;
+  }
+  cx /= zone.length || 1;
+  cy /= zone.length || 1;
+  const awayX = cx - from.x;
+  const awayY = cy - from.y;
+  let ux = 1;
+  let uy = 0;
   let best = -Infinity;
   for (let i = 0; i < zone.length; i++) {
     const p = zone[i];
     const q = zone[(i + 1) % zone.length];
     const l = Math.hypot(q.x - p.x, q.y - p.y);
     if (l < 1e-9) continue;
-    for (const s of [1, -1]) {
-      const cand = { x: (s * (q.x - p.x)) / l, y: (s * (q.y - p.y)) / l };
-      const score = cand.x * away.x + cand.y * away.y;
-      if (score > best) {
-        best = score;
-        u = cand;
-      }
+    const ex = (q.x - p.x) / l;
+    const ey = (q.y - p.y) / l;
+    // The edge direction or its reverse, whichever points more away from the owner.
+    const score = ex * awayX + ey * awayY;
+    if (score > best) {
+      best = score;
+      ux = ex;
+      uy = ey;
+    }
+    if (-score > best) {
+      best = -score;
+      ux = -ex;
+      uy = -ey;
     }
   }
-  const v = { x: -u.y, y: u.x };
+  const vx = -uy;
+  const vy = ux;
   let uLo = Infinity;
   let uHi = -Infinity;
   let vLo = Infinity;
   let vHi = -Infinity;
   for (const p of zone) {
-    const du = (p.x - c.x) * u.x + (p.y - c.y) * u.y;
-    const dv = (p.x - c.x) * v.x + (p.y - c.y) * v.y;
-    uLo = Math.min(uLo, du);
-    uHi = Math.max(uHi, du);
-    vLo = Math.min(vLo, dv);
-    vHi = Math.max(vHi, dv);
+    const du = (p.x - cx) * ux + (p.y - cy) * uy;
+    const dv = (p.x - cx) * vx + (p.y - cy) * vy;
+    if (du < uLo) uLo = du;
+    if (du > uHi) uHi = du;
+    if (dv < vLo) vLo = dv;
+    if (dv > vHi) vHi = dv;
   }
-  return { origin: { x: c.x + u.x * uLo, y: c.y + u.y * uLo }, u, v, vMin: vLo, vMax: vHi, length: uHi - uLo };
+  return { origin: { x: cx + ux * uLo, y: cy + uy * uLo }, u: { x: ux, y: uy }, v: { x: vx, y: vy }, vMin: vLo, vMax: vHi, length: uHi - uLo };
 }
 
 /** (u, v) coordinates of a world point in the strip's frame. */
@@ -68,6 +84,24 @@ export function toStrip(s: Strip, p: Vec2): { u: number; v: number } {
 /** A world point at (u, v) in the strip's frame. */
 export function fromStrip(s: Strip, u: number, v: number): Vec2 {
   return { x: s.origin.x + s.u.x * u + s.v.x * v, y: s.origin.y + s.u.y * u + s.v.y * v };
+}
+
+/** Floor bounds of the strip (its first `length` mm), grown by `pad` mm, without building its outline. */
+export function stripBounds(s: Strip, pad = 0, length = s.length): Bounds2 {
+  const ox = s.origin.x;
+  const oy = s.origin.y;
+  const ax = s.u.x * length;
+  const ay = s.u.y * length;
+  const x0 = ox + s.v.x * s.vMin;
+  const x1 = ox + s.v.x * s.vMax;
+  const y0 = oy + s.v.y * s.vMin;
+  const y1 = oy + s.v.y * s.vMax;
+  return {
+    minX: Math.min(x0, x1, x0 + ax, x1 + ax) - pad,
+    minY: Math.min(y0, y1, y0 + ay, y1 + ay) - pad,
+    maxX: Math.max(x0, x1, x0 + ax, x1 + ax) + pad,
+    maxY: Math.max(y0, y1, y0 + ay, y1 + ay) + pad,
+  };
 }
 
 /** The strip's outline in world coordinates, counter-clockwise. */
@@ -133,43 +167,52 @@ export function firstHitConvex(s: Strip, poly: readonly Vec2[], shrink = 1): num
 
 /** Distance along the strip at which a segment (a wall) first crosses it, mm; Infinity when it does not. */
 export function firstHitSegment(s: Strip, a: Vec2, b: Vec2, shrink = 1): number {
-  const pa = toStrip(s, a);
-  const pb = toStrip(s, b);
+  // Scalars only: this runs for every wall against every strip.
+  const ax = a.x - s.origin.x;
+  const ay = a.y - s.origin.y;
+  const bx = b.x - s.origin.x;
+  const by = b.y - s.origin.y;
+  const au = ax * s.u.x + ay * s.u.y;
+  const av = ax * s.v.x + ay * s.v.y;
+  const bu = bx * s.u.x + by * s.u.y;
+  const bv = bx * s.v.x + by * s.v.y;
+  const lo = s.vMin + shrink;
+  const hi = s.vMax - shrink;
+  // Clip the segment's parameter range [0, 1] by each half-plane of the band and by u >= 0.
   let t0 = 0;
   let t1 = 1;
-  // Clip the segment's parameter range by each half-plane of the band and by u >= 0.
-  const planes: [number, number][] = [
-    [pa.v - (s.vMin + shrink), pb.v - (s.vMin + shrink)],
-    [s.vMax - shrink - pa.v, s.vMax - shrink - pb.v],
-    [pa.u, pb.u],
-  ];
-  for (const [da, db] of planes) {
+  for (let k = 0; k < 3; k++) {
+    const da = k === 0 ? av - lo : k === 1 ? hi - av : au;
+    const db = k === 0 ? bv - lo : k === 1 ? hi - bv : bu;
     if (da < 0 && db < 0) return Infinity;
     if (da < 0) t0 = Math.max(t0, da / (da - db));
     else if (db < 0) t1 = Math.min(t1, da / (da - db));
   }
   if (t0 > t1) return Infinity;
-  return Math.min(pa.u + (pb.u - pa.u) * t0, pa.u + (pb.u - pa.u) * t1);
+  return Math.min(au + (bu - au) * t0, au + (bu - au) * t1);
 }
 
 /** The stretch [from, to] of the strip's centre line that lies over a convex polygon, mm along it; null when none. */
 export function centreLineCover(s: Strip, poly: readonly Vec2[]): [number, number] | null {
   const vc = (s.vMin + s.vMax) / 2;
-  const pts = poly.map((p) => toStrip(s, p));
   let lo = Infinity;
   let hi = -Infinity;
-  for (let i = 0; i < pts.length; i++) {
-    const a = pts[i];
-    const b = pts[(i + 1) % pts.length];
-    if ((a.v - vc) * (b.v - vc) > 0 || a.v === b.v) {
-      if (a.v === vc) {
-        lo = Math.min(lo, a.u);
-        hi = Math.max(hi, a.u);
+  const n = poly.length;
+  for (let i = 0; i < n; i++) {
+    const p = poly[i];
+    const q = poly[(i + 1) % n];
+    const pu = (p.x - s.origin.x) * s.u.x + (p.y - s.origin.y) * s.u.y;
+    const pv = (p.x - s.origin.x) * s.v.x + (p.y - s.origin.y) * s.v.y;
+    const qu = (q.x - s.origin.x) * s.u.x + (q.y - s.origin.y) * s.u.y;
+    const qv = (q.x - s.origin.x) * s.v.x + (q.y - s.origin.y) * s.v.y;
+    if ((pv - vc) * (qv - vc) > 0 || pv === qv) {
+      if (pv === vc) {
+        lo = Math.min(lo, pu);
+        hi = Math.max(hi, pu);
       }
       continue;
     }
-    const t = (vc - a.v) / (b.v - a.v);
-    const u = a.u + (b.u - a.u) * t;
+    const u = pu + ((qu - pu) * (vc - pv)) / (qv - pv);
     lo = Math.min(lo, u);
     hi = Math.max(hi, u);
   }

@@ -1,4 +1,4 @@
-import type { CheckContext } from "../context";
+import { fixtureSolid, type CheckContext } from "../context";
 import { finding } from "../finding";
 import { prismPenetration } from "../geom/polygon";
 import { KIND, isCounter } from "../kinds";
@@ -14,7 +14,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const tol = ctx.numbers.collisionToleranceMm;
   for (const f of ctx.fixtures) {
     const fIn = !ids || ids.has(f.id);
-    for (const s of ctx.solids.query(ctx.solids.get(`fixture:${f.id}`)?.bounds ?? { minX: 0, minY: 0, maxX: -1, maxY: -1 })) {
+    for (const s of ctx.solids.query(fixtureSolid(f).bounds)) {
       if (s.id === f.id) continue;
       if (s.source === "obstacle" && (s.kind === "parking-bay" || s.kind === "outlet")) continue;
       // Each pair once: fixtures by id order, subject "a|b" so a re-check after either moves replaces it.

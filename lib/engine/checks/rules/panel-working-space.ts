@@ -2,8 +2,8 @@ import type { Obstacle } from "../../plan/schema";
 import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
-import { centroid, expandBounds, polygonBounds, prismPenetration } from "../geom/polygon";
-import { firstHitConvex, stripPolygon, stripThroughZone } from "../geom/strip";
+import { centroid, polygonBounds, prismPenetration } from "../geom/polygon";
+import { firstHitConvex, stripBounds, stripThroughZone } from "../geom/strip";
 import type { RuleNumbers } from "../numbers";
 import type { Finding, Rule } from "../types";
 
@@ -32,11 +32,11 @@ function check(ctx: CheckContext): Finding[] {
     const height = Math.max(n.panelHeadroomMm, top);
     const note = ctx.presetNote("panelDepthLowVoltageMm", "panelDepthCond1Mm", "panelDepthCond2Mm", "panelDepthCond3Mm", "panelMinWidthMm", "panelHeadroomMm");
     const strip = { ...stripThroughZone(work.prism.polygon, centroid(body.body.polygon)), length: depth };
-    const run = clearRun(ctx, strip, { zLo: 0, zHi: height, exclude: new Set([p.id]) });
+    const run = clearRun(ctx, strip, { zLo: 0, zHi: height, excludeId: p.id });
     let clear = run.clearMm;
     let by = run.blocker?.label;
     let blockerId = run.blocker?.source === "fixture" ? run.blocker.id : undefined;
-    for (const zi of ctx.zoneIndex.query(expandBounds(polygonBounds(stripPolygon(strip)), 1))) {
+    for (const zi of ctx.zoneIndex.query(stripBounds(strip, 1))) {
       if (zi.zone.purpose !== "parking-vehicle" && zi.zone.purpose !== "parking-doors") continue;
       const d = firstHitConvex(strip, zi.zone.prism.polygon);
       if (d < clear) {

@@ -23,7 +23,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
       const what = NAMES[z.purpose];
       if (!what) continue;
       const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
-      const run = clearRun(ctx, strip, { zLo: z.prism.zMin, zHi: z.prism.zMax, exclude: new Set([f.id]) });
+      const run = clearRun(ctx, strip, { zLo: z.prism.zMin, zHi: z.prism.zMax, excludeId: f.id });
       const need = strip.length;
       const ok = run.clearMm >= need - 0.5;
       out.push(

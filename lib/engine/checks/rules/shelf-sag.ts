@@ -16,16 +16,21 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const lbPerFt = (n.shelfLoadKgPerM * LB_PER_KG) / FT_PER_M;
   // One finding per distinct shelf size in a fixture: identical shelves sag alike.
   const seen = new Set<string>();
-  const docs = new Map(ctx.plan.fixtures.map((d) => [d.id, d]));
+  // A shelf run says its own load and stiffness; other shelves carry the rule's book load.
+  const runs = new Map<string, ReturnType<typeof runLoad>>();
+  for (const d of ctx.plan.fixtures) if (d.kind === "shelf-run") runs.set(d.id, runLoad(d.params));
+  const stiffByMaterial = new Map<string, string>();
   for (const p of ctx.parts) {
     if ((ids && !ids.has(p.fixtureId)) || !/shelf/i.test(p.name)) continue;
     const key = `${p.fixtureId}|${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
     if (seen.has(key)) continue;
     seen.add(key);
-    // A shelf run says its own load and stiffness; other shelves carry the rule's book load.
-    const doc = docs.get(p.fixtureId);
-    const rp = doc?.kind === "shelf-run" ? runLoad(doc.params) : undefined;
-    const stiff = rp?.stiffnessKey ?? stiffnessKeyFor(p.materialId, ctx.plan.materials);
+    const rp = runs.get(p.fixtureId);
+    let stiff = rp?.stiffnessKey ?? stiffByMaterial.get(p.materialId);
+    if (!stiff) {
+      stiff = stiffnessKeyFor(p.materialId, ctx.plan.materials);
+      stiffByMaterial.set(p.materialId, stiff);
+    }
     const load = rp ? rp.loadLbPerFt : lbPerFt;
     const r = shelfSag({
       spanMm: p.lengthMm,

@@ -4,7 +4,7 @@ import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { centroid } from "../geom/polygon";
-import { centreLineCover, coveredFromStart, makeStrip, stripThroughZone, type Strip } from "../geom/strip";
+import { centreLineCover, coveredFromStart, makeStrip, stripBounds, stripThroughZone, type Strip } from "../geom/strip";
 import { KIND, PURPOSE, hasZone, isMiterStation, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
 
@@ -44,7 +44,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
       const run = clearRun(ctx, strip, {
         zLo: table + n.flushToleranceMm,
         zHi: table + n.stockThicknessMm,
-        exclude: new Set([f.id]),
+        excludeId: f.id,
         // The stop track rides beside the stock, on the counter; it guides rather than blocks.
         blocks: (s) => s.kind !== KIND.stopTrack,
       });
@@ -73,7 +73,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
       );
       // Support: counters (and the tool shelf itself) whose top is at table height, along the cut line.
       const intervals: [number, number][] = [];
-      for (const s of ctx.solids.query(boundsOf(strip))) {
+      for (const s of ctx.solids.query(stripBounds(strip))) {
         const sf = s.fixture;
         if (!sf) continue;
         const top = worldWorkSurface(sf);
@@ -99,12 +99,6 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     }
   }
   return out;
-}
-
-function boundsOf(s: Strip) {
-  const xs = [0, s.length].flatMap((u) => [s.vMin, s.vMax].map((v) => s.origin.x + s.u.x * u + s.v.x * v));
-  const ys = [0, s.length].flatMap((u) => [s.vMin, s.vMax].map((v) => s.origin.y + s.u.y * u + s.v.y * v));
-  return { minX: Math.min(...xs), minY: Math.min(...ys), maxX: Math.max(...xs), maxY: Math.max(...ys) };
 }
 
 /** Clear path and support for the longest stock each side of a miter saw's blade. */

@@ -30,7 +30,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
       const name = NAMES[z.purpose];
       if (!name) continue;
       const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
-      const run = clearRun(ctx, strip, { zLo: table + n.flushToleranceMm, zHi: table + n.stockThicknessMm, exclude: new Set([f.id]) });
+      const run = clearRun(ctx, strip, { zLo: table + n.flushToleranceMm, zHi: table + n.stockThicknessMm, excludeId: f.id });
       const need = strip.length;
       const ok = run.clearMm >= need - 0.5;
       const by = run.blocker ? ` (blocked by ${run.blocker.label})` : "";

@@ -2,8 +2,7 @@ import type { PlacedFixture } from "../../fixtures/types";
 import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
-import { expandBounds, polygonBounds } from "../geom/polygon";
-import { firstHitConvex, fromStrip, makeStrip, stripPolygon, type Strip } from "../geom/strip";
+import { firstHitConvex, fromStrip, makeStrip, stripBounds, type Strip } from "../geom/strip";
 import { isFloorStanding } from "../kinds";
 import type { Finding, Rule } from "../types";
 
@@ -30,12 +29,12 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   for (const f of ctx.fixtures) {
     if ((ids && !ids.has(f.id)) || !isFloorStanding(f)) continue;
     const strip = frontStrip(f, n.walkwayMm);
-    const run = clearRun(ctx, strip, { zLo: 1, zHi: HEAD_HEIGHT_MM, exclude: new Set([f.id]) });
+    const run = clearRun(ctx, strip, { zLo: 1, zHi: HEAD_HEIGHT_MM, excludeId: f.id });
     let clear = run.clearMm;
     let blockerLabel = run.blocker?.label;
     let blockerFixture = run.blocker?.source === "fixture" ? run.blocker.id : undefined;
     let at = run.at;
-    for (const zi of ctx.zoneIndex.query(expandBounds(polygonBounds(stripPolygon(strip)), 1))) {
+    for (const zi of ctx.zoneIndex.query(stripBounds(strip, 1))) {
       if (!VEHICLE_PURPOSES.has(zi.zone.purpose)) continue;
       const d = firstHitConvex(strip, zi.zone.prism.polygon);
       if (d < clear) {
