@@ -92,7 +92,7 @@ const FINE_LENGTHS = new WeakMap<object, Map<number, string>>();
 /** Length formatter with a cache shared by every evaluation under the same settings object; `fine` writes to 1/32 in. */
 function memoLen(settings: PlanDocument["settings"], fine: boolean): (v: number) => string {
   const caches = fine ? FINE_LENGTHS : LENGTHS;
-  const fmt = fine ? { ...settings, precision: 32 } : settings;
+  const fmt: PlanDocument["settings"] = fine ? { ...settings, precision: 32 } : settings;
   let cache = caches.get(settings);
   if (!cache) {
     cache = new Map();
