@@ -3,7 +3,6 @@ import localFont from "next/font/local";
 import type { ReactNode } from "react";
 import { Header } from "@/components/shell/Header";
 import { sessionUser } from "@/lib/server/viewer";
-import { Providers } from "./providers";
 import "./globals.css";
 
 const inter = localFont({ src: "../public/fonts/InterVariable-latin.woff2", variable: "--font-inter", display: "swap", weight: "100 900" });
@@ -19,11 +18,9 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   return (
     <html lang="en" className={inter.variable}>
       <body className="min-h-screen font-sans antialiased">
-        <Providers>
-          <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper focus:p-2">Skip to content</a>
-          <Header user={user ? { name: user.name, role: user.role } : null} />
-          <main id="main">{children}</main>
-        </Providers>
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper focus:p-2">Skip to content</a>
+        <Header user={user ? { name: user.name, role: user.role } : null} />
+        <main id="main">{children}</main>
       </body>
     </html>
   );

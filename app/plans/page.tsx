@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { PlansList } from "@/components/plans/PlansList";
 import { sessionUser } from "@/lib/server/viewer";
+import { QueryProvider } from "@/app/providers";
 
 export const metadata: Metadata = { title: "My plans" };
 
@@ -10,7 +11,9 @@ export default async function PlansPage() {
   return (
     <div className="mx-auto max-w-6xl px-4 py-8">
       <h1 className="mb-6 text-2xl font-semibold text-walnut-900">My plans</h1>
-      <PlansList />
+      <QueryProvider>
+        <PlansList />
+      </QueryProvider>
     </div>
   );
 }

@@ -1,8 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import { signIn } from "next-auth/react";
 import { useState, type FormEvent } from "react";
+import { signInWithPassword } from "./auth-client";
 import { Field } from "./Field";
 
 const MESSAGES: Record<string, string> = {
@@ -19,9 +19,9 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     const form = new FormData(e.currentTarget);
     setBusy(true);
     setError(null);
-    const res = await signIn("credentials", { redirect: false, email: String(form.get("email")), password: String(form.get("password")) });
+    const res = await signInWithPassword(String(form.get("email")), String(form.get("password")), callbackUrl).catch(() => null);
     setBusy(false);
-    if (res?.ok && !res.error) {
+    if (res?.ok) {
       window.location.assign(callbackUrl);
       return;
     }

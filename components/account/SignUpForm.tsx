@@ -1,8 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import { signIn } from "next-auth/react";
 import { useState, type FormEvent } from "react";
+import { signInWithPassword } from "./auth-client";
 import { Field } from "./Field";
 
 type Errors = Partial<Record<"name" | "email" | "password" | "_", string>>;
@@ -24,7 +24,7 @@ export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
         setErrors({ ...(data?.error?.fields ?? {}), _: data?.error?.message ?? "Could not create the account. Try again." });
         return;
       }
-      const signed = await signIn("credentials", { redirect: false, email: body.email, password: body.password });
+      const signed = await signInWithPassword(body.email, body.password, callbackUrl);
       if (signed?.ok) {
         // Ask for the address-confirmation e-mail; the account works meanwhile, so a failure here is not fatal.
         await fetch("/api/v1/account/verify", { method: "POST" }).catch(() => undefined);
