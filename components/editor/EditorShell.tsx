@@ -1,5 +1,6 @@
 "use client";
 import dynamic from "next/dynamic";
+import Link from "next/link";
 import { EditorProvider } from "@/lib/client/react/EditorContext";
 import { useUi } from "@/lib/client/react/useEditorState";
 import { Catalogue } from "./Catalogue";
@@ -22,6 +23,8 @@ const EditorCanvas = dynamic(() => import("@/scene/EditorCanvas"), { ssr: false,
 const PartsTab = dynamic(() => import("./PartsTab").then((m) => m.PartsTab), { loading: () => <p className="text-sm text-walnut-500">Loading the parts…</p> });
 const RevisionsPanel = dynamic(() => import("./RevisionsPanel").then((m) => m.RevisionsPanel), { loading: () => <p className="text-sm text-walnut-500">Loading the history…</p> });
 const ShortcutHelp = dynamic(() => import("./ShortcutHelp").then((m) => m.ShortcutHelp));
+const PlanSettings = dynamic(() => import("./PlanSettings").then((m) => m.PlanSettings));
+const ElevationPhotos = dynamic(() => import("./ElevationPhotos").then((m) => m.ElevationPhotos));
 
 function Announcer() {
   const text = useUi((s) => s.announcement);
@@ -54,6 +57,11 @@ function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnT
           <h1 className="text-lg font-semibold text-walnut-900">{plan.name}</h1>
           <SaveIndicator saver={saver} />
           {plan.role === "viewer" ? <span className="rounded bg-steel-100 px-2 text-xs text-steel-700">View only: changes are not saved</span> : null}
+          {plan.role === "owner" ? (
+            <Link href={`/plans/${plan.id}/share`} className="rounded border border-walnut-300 px-2 py-0.5 text-xs text-walnut-900 hover:bg-walnut-100" data-testid="share-link">
+              Share
+            </Link>
+          ) : null}
           <div className="ml-auto">
             <Toolbar />
           </div>
@@ -63,7 +71,16 @@ function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnT
           <aside className="min-h-0 border-r border-walnut-100 bg-paper-deep/40" aria-label="Plan panels">
             <SidePanel
               tabs={[
-                { id: "room", label: "Room", body: () => <RoomForm /> },
+                {
+                  id: "room",
+                  label: "Room",
+                  body: () => (
+                    <div className="flex flex-col gap-4">
+                      <PlanSettings planId={plan.id} canEdit={plan.role !== "viewer"} />
+                      <RoomForm />
+                    </div>
+                  ),
+                },
                 {
                   id: "layout",
                   label: "Layout",
@@ -86,6 +103,7 @@ function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnT
               <EditorCanvas editor={editor} label={`3D view of ${plan.name}. Use the outline list to select fixtures and the arrow keys to move them.`} />
             </div>
             <ZoneLegend />
+            <ElevationPhotos planId={plan.id} canEdit={plan.role !== "viewer"} />
           </section>
           <aside className="min-h-0 overflow-y-auto border-l border-walnut-100 p-3" aria-label="Properties">
             <PropertiesPanel />

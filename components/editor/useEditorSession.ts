@@ -6,6 +6,7 @@ import { idbLocalCopies } from "@/lib/client/autosave/local-copy";
 import { plansApi } from "@/lib/client/autosave/plans-api";
 import { Editor } from "@/lib/client/editor";
 import { liveEngine } from "@/lib/client/engine-live";
+import { usePlanPreset } from "./usePlanPreset";
 
 export interface PlanInit {
   id: string;
@@ -45,5 +46,6 @@ export function useEditorSession(plan: PlanInit) {
     };
   }, [session, plan.role]);
 
+  usePlanPreset(session.editor, plan.id);
   return session;
 }

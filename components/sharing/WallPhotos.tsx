@@ -8,10 +8,12 @@ import { deletePhoto, listPhotos, setScale, uploadPhoto, type Photo } from "./ph
 
 /**
  * Reference photos of the walls: upload (checked and cleaned by the server; location data removed),
- * scale by two points, and see the scaled photo behind the wall's elevation.
+ * scale by two points, and see the scaled photo behind the wall's elevation. Given `wallId` (the
+ * editor's elevation view), it shows that wall's photos and leaves out its own wall choice.
  */
-export function WallPhotos({ planId, document, canEdit }: { planId: string; document: PlanDocument; canEdit: boolean }) {
-  const [wallId, setWallId] = useState(document.room.walls[0]?.id ?? "");
+export function WallPhotos({ planId, document, canEdit, wallId: fixedWall, compact = false }: { planId: string; document: PlanDocument; canEdit: boolean; wallId?: string; compact?: boolean }) {
+  const [chosenWall, setWallId] = useState(document.room.walls[0]?.id ?? "");
+  const wallId = fixedWall ?? chosenWall;
   const [photos, setPhotos] = useState<Photo[]>([]);
   const [msg, setMsg] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -40,17 +42,23 @@ export function WallPhotos({ planId, document, canEdit }: { planId: string; docu
   const shown = mine.find((p) => p.mmPerPx && p.url);
   return (
     <section aria-labelledby="photos-h" className="flex flex-col gap-3">
-      <h2 id="photos-h" className="text-lg font-semibold text-walnut-900">Wall photos</h2>
-      <p className="text-sm text-walnut-700">Photos help you trace outlets, pipes and studs. Every photo is re-encoded before anyone else sees it; its camera data and location are removed.</p>
+      {compact ? (
+        <h2 id="photos-h" className="text-sm font-semibold text-walnut-900">Photos of this wall</h2>
+      ) : (
+        <h2 id="photos-h" className="text-lg font-semibold text-walnut-900">Wall photos</h2>
+      )}
+      <p className={compact ? "text-xs text-walnut-700" : "text-sm text-walnut-700"}>Photos help you trace outlets, pipes and studs. Every photo is re-encoded before anyone else sees it; its camera data and location are removed.</p>
       <div className="flex flex-wrap items-end gap-2 text-sm">
-        <label className="flex flex-col">
-          Wall
-          <select value={wallId} onChange={(e) => setWallId(e.target.value)} className="rounded-md border border-walnut-300 bg-white px-2 py-1">
-            {document.room.walls.map((w) => (
-              <option key={w.id} value={w.id}>{w.label || w.id}</option>
-            ))}
-          </select>
-        </label>
+        {fixedWall === undefined && (
+          <label className="flex flex-col">
+            Wall
+            <select value={wallId} onChange={(e) => setWallId(e.target.value)} className="rounded-md border border-walnut-300 bg-white px-2 py-1">
+              {document.room.walls.map((w) => (
+                <option key={w.id} value={w.id}>{w.label || w.id}</option>
+              ))}
+            </select>
+          </label>
+        )}
         {canEdit && (
           <label className="rounded-md border border-walnut-700 px-3 py-1.5">
             {busy ? "Uploading…" : "Add a photo (JPEG, PNG or WebP, up to 12 MB)"}
@@ -59,7 +67,8 @@ export function WallPhotos({ planId, document, canEdit }: { planId: string; docu
         )}
       </div>
       {msg && <p role="alert" className="text-sm text-brick-700">{msg}</p>}
-      {shown && <ElevationSketch document={document} wallId={wallId} photo={{ url: shown.url!, widthMm: (shown.widthPx ?? 0) * shown.mmPerPx!, heightMm: (shown.heightPx ?? 0) * shown.mmPerPx! }} />}
+      {compact && canEdit && mine.length === 0 && <p className="text-xs text-walnut-500">No photos of this wall yet.</p>}
+      {shown && !compact && <ElevationSketch document={document} wallId={wallId} photo={{ url: shown.url!, widthMm: (shown.widthPx ?? 0) * shown.mmPerPx!, heightMm: (shown.heightPx ?? 0) * shown.mmPerPx! }} />}
       <ul className="grid gap-4 md:grid-cols-2">
         {mine.map((p) => (
           <li key={p.id} className="rounded-lg border border-walnut-100 bg-white p-2">

@@ -2,7 +2,7 @@ import type { SolvedWall } from "@/lib/engine/room/types";
 import type { Footprint, PlacedFixture } from "@/lib/engine/fixtures/types";
 import type { FixtureDoc, PlanDocument } from "@/lib/engine/plan/schema";
 import { createDerivedStore, recompute, type Analyser, type DerivedStore } from "./derived/derived-store";
-import type { EnginePort } from "./engine-port";
+import type { AdoptedPreset, EnginePort } from "./engine-port";
 import { createPlanStore, PlanHistory, type DocRecipe } from "./store/plan-store";
 import { gridStepFor } from "./store/grid-steps";
 import { createUiStore, type UiState, type UiStore } from "./store/ui-store";
@@ -26,13 +26,14 @@ export class Editor {
   readonly tools: ToolController;
   private readonly unsub: () => void;
   private readonly analyse: Analyser;
+  private presetInForce: AdoptedPreset | null = null;
 
   constructor(init: EditorInit) {
     this.engine = init.engine;
     this.history = new PlanHistory(createPlanStore(init.doc));
     this.ui = createUiStore(init.ui);
     this.derived = createDerivedStore();
-    this.analyse = this.engine.createAnalyser();
+    this.analyse = this.engine.createAnalyser({ preset: () => this.presetInForce });
     recompute(this.derived, this.analyse, init.doc);
     this.unsub = this.history.store.subscribe((s) => {
       recompute(this.derived, this.analyse, s.doc);
@@ -43,6 +44,19 @@ export class Editor {
 
   dispose(): void {
     this.unsub();
+  }
+
+  /** The adopted preset whose numbers the live checks use (null: the standard numbers). */
+  get preset(): AdoptedPreset | null {
+    return this.presetInForce;
+  }
+
+  /** Puts a preset's numbers in force (or none) and checks the plan again with them. */
+  setPreset(preset: AdoptedPreset | null): void {
+    if (preset === this.presetInForce) return;
+    this.presetInForce = preset;
+    this.ui.setState({ presetName: preset?.name ?? null });
+    recompute(this.derived, this.analyse, this.doc, true);
   }
 
   get doc(): PlanDocument {

@@ -5,7 +5,7 @@ import { FIXTURE_KINDS, getFixtureKind } from "@/lib/engine/fixtures/registry";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { formatLength } from "@/lib/engine/units/format-length";
 import { parseLength } from "@/lib/engine/units/parse-length";
-import type { EnginePort } from "./engine-port";
+import type { AdoptedPreset, AnalyserOptions, EnginePort } from "./engine-port";
 
 /** Ids of fixtures added, removed or replaced between two documents (edits keep unchanged fixtures by reference). */
 export function changedFixtureIds(prev: PlanDocument, next: PlanDocument): string[] {
@@ -20,14 +20,17 @@ export function changedFixtureIds(prev: PlanDocument, next: PlanDocument): strin
 
 /**
  * Derive and check, incrementally when only fixtures changed (a drag step re-places one fixture and
- * re-checks what it can reach); anything else (room, settings, materials) starts over.
+ * re-checks what it can reach); anything else (room, settings, materials, the adopted preset) starts over.
  */
-function createLiveAnalyser() {
+function createLiveAnalyser(opts: AnalyserOptions = {}) {
   let prevDoc: PlanDocument | null = null;
   let prevDerived: Derived | null = null;
   let checker: IncrementalChecker | null = null;
+  let prevPreset: AdoptedPreset | null = null;
   return (doc: PlanDocument) => {
-    const fixturesOnly = prevDoc && prevDerived && checker && prevDoc.room === doc.room && prevDoc.settings === doc.settings && prevDoc.materials === doc.materials && prevDoc.schemaVersion === doc.schemaVersion;
+    const preset = opts.preset?.() ?? null;
+    const fixturesOnly =
+      prevDoc && prevDerived && checker && preset === prevPreset && prevDoc.room === doc.room && prevDoc.settings === doc.settings && prevDoc.materials === doc.materials && prevDoc.schemaVersion === doc.schemaVersion;
     let derived: Derived;
     let findings;
     if (fixturesOnly) {
@@ -36,11 +39,13 @@ function createLiveAnalyser() {
       findings = checker!.update(doc, derived, changed);
     } else {
       derived = derivePlan(doc);
-      checker = createChecker(doc, derived);
+      // The checks use the adopted preset's numbers, and findings name it (engine EvaluateOptions).
+      checker = createChecker(doc, derived, preset ? { preset: preset.numbers, presetLabel: preset.name } : {});
       findings = checker.findings();
     }
     prevDoc = doc;
     prevDerived = derived;
+    prevPreset = preset;
     return { derived, findings };
   };
 }

@@ -1,4 +1,5 @@
 import type { z } from "zod";
+import type { RuleNumbers } from "@/lib/engine/checks/numbers";
 import type { Finding } from "@/lib/engine/checks/types";
 import type { Derived } from "@/lib/engine/derive-types";
 import type { Footprint } from "@/lib/engine/fixtures/types";
@@ -19,13 +20,25 @@ export interface ParseOptions {
   allowNegative?: boolean;
 }
 
+/** An instructor's rule preset the plan has adopted: its numbers win over the defaults, and findings name it. */
+export interface AdoptedPreset {
+  id: string;
+  name: string;
+  numbers: Partial<RuleNumbers>;
+}
+
+export interface AnalyserOptions {
+  /** The preset in force now (read on every analysis; a different object starts the checks over). */
+  preset?: () => AdoptedPreset | null;
+}
+
 /**
  * What the editor needs from the engine. The live implementation (engine-live.ts) calls the
  * engine; tests may pass a small stand-in so the store and tools are tested on their own.
  */
 export interface EnginePort {
   /** A derive-and-check function for one editor; it may keep state to work incrementally between calls. */
-  createAnalyser(): (doc: PlanDocument) => { derived: Derived; findings: Finding[] };
+  createAnalyser(opts?: AnalyserOptions): (doc: PlanDocument) => { derived: Derived; findings: Finding[] };
   kinds(): readonly KindInfo[];
   /** The kind's parameters schema (the properties panel is generated from it). */
   paramsSchema(kind: string): z.ZodType | undefined;

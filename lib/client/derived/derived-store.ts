@@ -26,9 +26,9 @@ export type DerivedStore = ReturnType<typeof createDerivedStore>;
 export type Analyser = ReturnType<EnginePort["createAnalyser"]>;
 
 /** Re-derives and re-checks the plan (the analyser works incrementally when only fixtures changed). */
-export function recompute(store: DerivedStore, analyse: Analyser, doc: PlanDocument): void {
+export function recompute(store: DerivedStore, analyse: Analyser, doc: PlanDocument, force = false): void {
   const prev = store.getState();
-  if (prev.doc === doc) return;
+  if (prev.doc === doc && !force) return;
   const t0 = performance.now();
   try {
     const { derived, findings } = analyse(doc);

@@ -51,6 +51,8 @@ export interface UiState {
   measurement: Measurement | null;
   helpOpen: boolean;
   tab: PanelTab;
+  /** The name of the class preset whose numbers the checks use, when one is in force. */
+  presetName: string | null;
   /** Polite live-region text for screen readers (what the last command did). */
   announcement: string;
 }
@@ -73,6 +75,7 @@ export function createUiStore(init: Partial<UiState> = {}) {
     helpOpen: false,
     tab: "layout",
     announcement: "",
+    presetName: null,
     ...init,
   }));
 }
