@@ -77,3 +77,28 @@ describe("snapping to what a fixture really occupies", () => {
     expect(outside).toHaveLength(0);
   });
 });
+
+describe("an adopted class preset", () => {
+  it("puts its numbers in force in the live checks, and the standard numbers come back without it", () => {
+    const ed = new Editor({ doc: newPlanDocument(), engine: liveEngine });
+    const left = place(ed, "base-cabinet", 0);
+    const shelf = place(ed, "tool-shelf", ed.footprint(left)!.widthMm);
+    const right = place(ed, "base-cabinet", ed.footprint(left)!.widthMm + ed.footprint(shelf)!.widthMm);
+    const f = ed.fixture(right)!;
+    // Raise the right counter 1/2 in: each side of the shelf is 6.35 mm off (the shelf follows the mean).
+    ed.edit((d) => setParams(d, right, { ...f.params, carcassHeightMm: Number(f.params.carcassHeightMm) + 12.7 }));
+    const flush = () => ed.derived.getState().findings.filter((x) => x.ruleId === "table-flush");
+    // Standard tolerance 1/32 in (0.79 mm, plan setting): both sides fail.
+    expect(flush().filter((x) => !x.pass)).toHaveLength(2);
+    // A made-up class preset allowing 1/2 in (12.7 mm): both pass, and the finding's required number is the preset's.
+    ed.setPreset({ id: "p1", name: "Intro class", numbers: { flushToleranceMm: 12.7 } });
+    expect(flush().every((x) => x.pass)).toBe(true);
+    expect(flush()[0].required).toBeCloseTo(12.7, 6);
+    expect(ed.ui.getState().presetName).toBe("Intro class");
+    // Still in force for incremental re-checks after an edit (a drag step).
+    ed.edit((d) => setParams(d, right, { ...ed.fixture(right)!.params, carcassHeightMm: Number(f.params.carcassHeightMm) + 12 }));
+    expect(flush().every((x) => x.pass)).toBe(true);
+    ed.setPreset(null);
+    expect(flush().filter((x) => !x.pass)).toHaveLength(2);
+  });
+});
