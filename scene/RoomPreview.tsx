@@ -1,11 +1,13 @@
 "use client";
 
 import { OrbitControls } from "@react-three/drei";
-import { Canvas, useFrame } from "@react-three/fiber";
-import { useMemo } from "react";
-import { Shape } from "three";
+import { Canvas, useFrame, useThree } from "@react-three/fiber";
+import { useEffect, useMemo, useRef } from "react";
+import { Shape, Vector3 } from "three";
+import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { solveRoom } from "@/lib/engine/room/solve";
+import { ease, stepPointToScene, type StepCameraMm } from "./step-camera";
 
 declare global {
   interface Window {
@@ -53,8 +55,34 @@ function Walls({ document }: { document: PlanDocument }) {
   );
 }
 
-/** A simple 3D look at the plan's room: the solved floor and its walls, with orbit controls. */
-export default function RoomPreview({ document }: { document: PlanDocument }) {
+const MOVE_MS = 700;
+
+/** Moves the camera to a walk-through step's saved view (at once when the reader prefers less motion). */
+function SavedView({ view }: { view?: StepCameraMm }) {
+  const camera = useThree((s) => s.camera);
+  const controls = useThree((s) => s.controls) as OrbitControlsImpl | null;
+  const move = useRef<{ from: Vector3; to: Vector3; fromTarget: Vector3; toTarget: Vector3; t0: number } | null>(null);
+  useEffect(() => {
+    if (!view || !controls) return;
+    const to = new Vector3(...stepPointToScene(view.position));
+    const toTarget = new Vector3(...stepPointToScene(view.target));
+    const still = typeof window !== "undefined" && window.matchMedia?.("(prefers-reduced-motion: reduce)").matches;
+    move.current = { from: camera.position.clone(), to, fromTarget: controls.target.clone(), toTarget, t0: still ? -Infinity : performance.now() };
+  }, [view, camera, controls]);
+  useFrame(() => {
+    const m = move.current;
+    if (!m || !controls) return;
+    const k = ease((performance.now() - m.t0) / MOVE_MS);
+    camera.position.lerpVectors(m.from, m.to, k);
+    controls.target.lerpVectors(m.fromTarget, m.toTarget, k);
+    controls.update();
+    if (k >= 1) move.current = null;
+  });
+  return null;
+}
+
+/** A simple 3D look at the plan's room: the solved floor and its walls, with orbit controls; `camera`: a step's saved view to move to. */
+export default function RoomPreview({ document, camera }: { document: PlanDocument; camera?: StepCameraMm }) {
   const room = useMemo(() => solveRoom(document.room), [document.room]);
   const cx = (room.corners.reduce((a, c) => a + c.x, 0) / room.corners.length) * M;
   const cy = (room.corners.reduce((a, c) => a + c.y, 0) / room.corners.length) * M;
@@ -65,6 +93,7 @@ export default function RoomPreview({ document }: { document: PlanDocument }) {
       <directionalLight position={[5, -5, 10]} intensity={1.2} />
       <Walls document={document} />
       <OrbitControls target={[cx, cy, 0]} makeDefault />
+      <SavedView view={camera} />
       <FrameCounter />
     </Canvas>
   );
