@@ -1,10 +1,12 @@
 "use client";
 import { useMemo } from "react";
+import type { Finding } from "@/lib/engine/checks/types";
 import { useEditor } from "@/lib/client/react/EditorContext";
 import { useDerived, useDoc, useUi } from "@/lib/client/react/useEditorState";
 import { describeZone } from "./zone-info";
 import { zoneStates } from "./zone-states";
 
+const NONE: readonly Finding[] = [];
 const stateCls = { conflict: "border-brick-500 bg-brick-100 text-brick-700", caution: "border-amberline-500 bg-amberline-100 text-amberline-700", clear: "border-pine-500 bg-pine-100 text-pine-700" } as const;
 const stateMark = { conflict: "✕", caution: "!", clear: "✓" } as const;
 
@@ -16,8 +18,10 @@ const stateMark = { conflict: "✕", caution: "!", clear: "✓" } as const;
 export function ZoneTooltip() {
   const ed = useEditor();
   const hover = useUi((s) => s.hoveredZone);
-  const zones = useDerived((s) => s.derived?.zones ?? null);
-  const findings = useDerived((s) => s.findings);
+  // Subscribed only while a zone is hovered, so a drag (which never hovers) does not re-render the card.
+  const hovering = hover !== null;
+  const zones = useDerived((s) => (hovering ? (s.derived?.zones ?? null) : null));
+  const findings = useDerived((s) => (hovering ? s.findings : NONE));
   // Re-format when the plan's units or precision change.
   const settings = useDoc((d) => d.settings);
   const zone = hover && zones ? zones.find((z) => z.id === hover.id) : undefined;
