@@ -21,7 +21,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   for (const d of ctx.plan.fixtures) if (d.kind === "shelf-run") runs.set(d.id, runLoad(d.params));
   const stiffByMaterial = new Map<string, string>();
   for (const p of ctx.parts) {
-    if ((ids && !ids.has(p.fixtureId)) || !/shelf/i.test(p.name)) continue;
+    if ((ids && !ids.has(p.fixtureId)) || !isShelf(p.name)) continue;
     const key = `${p.fixtureId}|${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
     if (seen.has(key)) continue;
     seen.add(key);
@@ -74,6 +74,17 @@ function runLoad(params: Record<string, unknown>): { loadLbPerFt: number; centre
     longTerm: params.longTerm === true,
     stiffnessKey: typeof key === "string" && stiffnessOf(key) ? key : undefined,
   };
+}
+
+/** Part names repeat (a few dozen across a shop): each is tested once. */
+const shelfNames = new Map<string, boolean>();
+function isShelf(name: string): boolean {
+  let v = shelfNames.get(name);
+  if (v === undefined) {
+    v = /shelf/i.test(name);
+    if (shelfNames.size < 10_000) shelfNames.set(name, v);
+  }
+  return v;
 }
 
 const limitIn = (mmValue: number) => (mmValue / 25.4).toFixed(3);

@@ -3,16 +3,17 @@ import { cautionRule } from "../caution-rule";
 
 const LAMINATE = /laminate|contact cement/i;
 
-/** The test per part: re-derives keep unchanged fixtures' part objects, so re-checks skip the regexes. */
-const memo = new WeakMap<Part, boolean>();
-const calls = (p: Part) => {
-  let v = memo.get(p);
+/** The test per text: parts repeat a few dozen names, materials and joinery notes, so each is tested once. */
+const memo = new Map<string, boolean>();
+const mentions = (text: string) => {
+  let v = memo.get(text);
   if (v === undefined) {
-    v = LAMINATE.test(p.name) || p.joinery.some((j) => LAMINATE.test(j)) || LAMINATE.test(p.materialId);
-    memo.set(p, v);
+    v = LAMINATE.test(text);
+    if (memo.size < 10_000) memo.set(text, v);
   }
   return v;
 };
+const calls = (p: Part) => mentions(p.name) || mentions(p.materialId) || p.joinery.some(mentions);
 
 /** Advice: ventilate when gluing laminate with solvent contact cement. */
 export const solventFumesRule = cautionRule({
@@ -29,7 +30,7 @@ export const solventFumesRule = cautionRule({
   applies: (ctx) => {
     const ids = new Set<string>();
     for (const p of ctx.parts) if (calls(p)) ids.add(p.fixtureId);
-    for (const h of ctx.hardware) if (LAMINATE.test(h.name) || LAMINATE.test(h.key)) ids.add(h.fixtureId);
+    for (const h of ctx.hardware) if (mentions(h.name) || mentions(h.key)) ids.add(h.fixtureId);
     return [...ids];
   },
   message: () => "Laminate is glued with contact cement: ventilate the garage, put out pilot lights and other ignition sources while the solvent flashes off.",
