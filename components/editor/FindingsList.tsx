@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useDeferredValue, useState } from "react";
 import type { Finding } from "@/lib/engine/checks/types";
 import { useEditor } from "@/lib/client/react/EditorContext";
-import { useDerived } from "@/lib/client/react/useEditorState";
+import { useDerived, useUi } from "@/lib/client/react/useEditorState";
 
 const badge: Record<string, { text: string; cls: string; mark: string }> = {
   conflict: { text: "Conflict", cls: "border-brick-500 bg-brick-100 text-brick-700", mark: "✕" },
@@ -51,6 +51,7 @@ export function FindingsList() {
   // Drags re-check on every step; the list may lag a frame behind rather than slow the drag.
   const findings = useDeferredValue(live);
   const [showPasses, setShowPasses] = useState(true);
+  const presetName = useUi((s) => s.presetName);
   const failing = findings.filter((f) => !f.pass);
   const passing = findings.filter((f) => f.pass);
   const conflicts = failing.filter((f) => f.severity === "conflict").length;
@@ -62,6 +63,11 @@ export function FindingsList() {
       <p className="text-xs text-walnut-700" role="status" data-testid="findings-summary">
         {conflicts} conflict{conflicts === 1 ? "" : "s"}, {failing.length - conflicts} other to look at, {passing.length} passing.
       </p>
+      {presetName ? (
+        <p className="text-xs text-walnut-700" data-testid="findings-preset">
+          Numbers set by the class preset “{presetName}” replace the standard ones (Room tab, plan settings).
+        </p>
+      ) : null}
       <ul className="flex flex-col gap-1">
         {failing.map((f, i) => (
           <FindingItem key={`${f.ruleId}-${i}-${f.fixtureIds.join(",")}`} f={f} />
