@@ -29,6 +29,23 @@ export function unionBounds(a: Bounds2, b: Bounds2): Bounds2 {
   return { minX: Math.min(a.minX, b.minX), minY: Math.min(a.minY, b.minY), maxX: Math.max(a.maxX, b.maxX), maxY: Math.max(a.maxY, b.maxY) };
 }
 
+/** Scratch spans [lo, hi], so the overlap test allocates nothing. */
+const SPAN_A = new Float64Array(2);
+const SPAN_B = new Float64Array(2);
+
+/** A polygon's extent along the axis (ax, ay), written to `out` as [lo, hi]. */
+function project(poly: readonly Vec2[], ax: number, ay: number, out: Float64Array): void {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of poly) {
+    const d = v.x * ax + v.y * ay;
+    if (d < lo) lo = d;
+    if (d > hi) hi = d;
+  }
+  out[0] = lo;
+  out[1] = hi;
+}
+
 /** Smallest overlap of the two polygons' projections on the edge normals of `edges`, mm (Infinity when it has no edges). */
 function minOverlapOnNormals(edges: readonly Vec2[], a: readonly Vec2[], b: readonly Vec2[], best: number): number {
   const n = edges.length;
@@ -41,21 +58,9 @@ function minOverlapOnNormals(edges: readonly Vec2[], a: readonly Vec2[], b: read
     if (len < 1e-9) continue;
     const ax = -ey / len;
     const ay = ex / len;
-    let alo = Infinity;
-    let ahi = -Infinity;
-    for (const v of a) {
-      const d = v.x * ax + v.y * ay;
-      if (d < alo) alo = d;
-      if (d > ahi) ahi = d;
-    }
-    let blo = Infinity;
-    let bhi = -Infinity;
-    for (const v of b) {
-      const d = v.x * ax + v.y * ay;
-      if (d < blo) blo = d;
-      if (d > bhi) bhi = d;
-    }
-    const overlap = Math.min(ahi, bhi) - Math.max(alo, blo);
+    project(a, ax, ay, SPAN_A);
+    project(b, ax, ay, SPAN_B);
+    const overlap = Math.min(SPAN_A[1], SPAN_B[1]) - Math.max(SPAN_A[0], SPAN_B[0]);
     if (overlap < best) best = overlap;
   }
   return best;

@@ -2,6 +2,7 @@ import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { KIND, isWallHung } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "anchor-fixtures";
 
@@ -43,7 +44,5 @@ export const anchorFixturesRule: Rule<CheckContext> = {
   ],
   severity: "advice",
   cautions: ["Use fasteners rated for the load into studs or masonry; local codes and the maker's instructions come first."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

@@ -3,6 +3,7 @@ import { finding } from "../finding";
 import { prismPenetration } from "../geom/polygon";
 import { KIND, isCounter } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "collisions";
 
@@ -50,7 +51,5 @@ export const collisionsRule: Rule<CheckContext> = {
   sources: [{ citation: "Geometry; tolerance is our own", status: "derived" }],
   severity: "conflict",
   cautions: ["Water heaters and furnaces need their own clearances from the maker's instructions and local code; keep storage away from them."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

@@ -2,6 +2,7 @@ import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { isCounter, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "counter-height";
 
@@ -54,7 +55,5 @@ export const counterHeightRule: Rule<CheckContext> = {
   ],
   severity: "caution",
   cautions: ["These are comfort ranges, not limits: choose by the work you do most at that surface."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

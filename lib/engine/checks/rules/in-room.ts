@@ -2,6 +2,7 @@ import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { outsideDepth } from "../geom/polygon";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "in-room";
 
@@ -50,7 +51,5 @@ export const inRoomRule: Rule<CheckContext> = {
   sources: [{ citation: "Geometry; tolerance is our own", status: "derived" }],
   severity: "conflict",
   cautions: [],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

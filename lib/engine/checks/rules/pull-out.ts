@@ -1,10 +1,8 @@
-import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
-import { finding } from "../finding";
-import { centroid } from "../geom/polygon";
-import { stripThroughZone } from "../geom/strip";
 import { PURPOSE } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { zoneRunFinding } from "../zone-run";
+import { perFixture } from "../per-fixture";
 
 const ID = "pull-out";
 const NAMES: Record<string, string> = {
@@ -22,30 +20,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     for (const z of f.zones) {
       const what = NAMES[z.purpose];
       if (!what) continue;
-      const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
-      const run = clearRun(ctx, strip, { zLo: z.prism.zMin, zHi: z.prism.zMax, excludeId: f.id });
-      const need = strip.length;
-      const ok = run.clearMm >= need - 0.5;
-      out.push(
-        finding(
-          ID,
-          "conflict",
-          ok,
-          f.id,
-          ok
-            ? `${f.label}: ${what} clear for ${ctx.len(need)}.`
-            : `${f.label}: ${what} clear for only ${ctx.len(run.clearMm)} of ${ctx.len(need)}${run.blocker ? ` before ${run.blocker.label}` : ""}.`,
-          {
-            fixtureIds: run.blocker?.source === "fixture" ? [f.id, run.blocker.id] : [f.id],
-            zoneIds: [z.id],
-            measured: run.clearMm,
-            required: need,
-            shortfall: need - run.clearMm,
-            unit: "mm",
-            at: ok ? undefined : run.at,
-          },
-        ),
-      );
+      out.push(zoneRunFinding(ctx, f, z, { ruleId: ID, what, zLo: z.prism.zMin, zHi: z.prism.zMax }));
     }
   }
   return out;
@@ -64,7 +39,5 @@ export const pullOutRule: Rule<CheckContext> = {
   sources: [{ citation: "Common cabinetmaking practice", status: "practice" }],
   severity: "conflict",
   cautions: [],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

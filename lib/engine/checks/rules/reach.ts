@@ -3,6 +3,7 @@ import { finding } from "../finding";
 import { convexPenetration, polygonBounds } from "../geom/polygon";
 import { fixtureInfo, hasShelves, isCounter } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "reach";
 
@@ -59,7 +60,5 @@ export const reachRule: Rule<CheckContext> = {
   ],
   severity: "advice",
   cautions: ["Keep heavy items between knee and shoulder height; use a step stool, not a drawer or counter edge."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

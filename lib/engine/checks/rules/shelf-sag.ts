@@ -4,6 +4,7 @@ import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { stiffnessKeyFor } from "../stiffness-key";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "shelf-sag";
 const LB_PER_KG = 1 / 0.45359237;
@@ -108,7 +109,5 @@ export const shelfSagRule: Rule<CheckContext> = {
   ],
   severity: "caution",
   cautions: [],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

@@ -7,6 +7,7 @@ import { centroid } from "../geom/polygon";
 import { centreLineCover, coveredFromStart, makeStrip, stripBounds, stripThroughZone, type Strip } from "../geom/strip";
 import { KIND, PURPOSE, hasZone, isMiterStation, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "stock-path";
 /** Gaps a board bridges without noticing, mm (our own choice: 1 in). */
@@ -123,7 +124,5 @@ export const stockPathRule: Rule<CheckContext> = {
     "Support long offcuts as well as the workpiece: an unsupported offcut can drop, pinch the blade and throw.",
     "Keep hands out of the marked blade zone and let the blade stop before lifting the head.",
   ],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

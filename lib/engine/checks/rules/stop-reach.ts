@@ -4,6 +4,7 @@ import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { KIND } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "stop-reach";
 
@@ -49,7 +50,5 @@ export const stopReachRule: Rule<CheckContext> = {
   sources: [{ citation: "Geometry of the plan and the stop table", status: "derived" }],
   severity: "caution",
   cautions: ["Set a stop with the saw unplugged; check the first cut with a tape before running a batch."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

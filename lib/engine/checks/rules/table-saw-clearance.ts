@@ -1,4 +1,3 @@
-import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import type { PlacedFixture, WorldZone } from "../../fixtures/types";
@@ -6,6 +5,8 @@ import { centroid, polygonBounds } from "../geom/polygon";
 import { centreLineCover, coveredFromStart, stripThroughZone } from "../geom/strip";
 import { PURPOSE, isTableSaw, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { zoneRunFinding } from "../zone-run";
+import { perFixture } from "../per-fixture";
 
 const ID = "saw-infeed-outfeed";
 const NAMES: Record<string, string> = {
@@ -29,30 +30,14 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
       }
       const name = NAMES[z.purpose];
       if (!name) continue;
-      const strip = stripThroughZone(z.prism.polygon, centroid(f.body.polygon));
-      const run = clearRun(ctx, strip, { zLo: table + n.flushToleranceMm, zHi: table + n.stockThicknessMm, excludeId: f.id });
-      const need = strip.length;
-      const ok = run.clearMm >= need - 0.5;
-      const by = run.blocker ? ` (blocked by ${run.blocker.label})` : "";
       out.push(
-        finding(
-          ID,
-          "conflict",
-          ok,
-          f.id,
-          ok
-            ? `${f.label}: ${name} clear for ${ctx.len(need)}.`
-            : `${f.label}: ${name} clear for only ${ctx.len(run.clearMm)} of ${ctx.len(need)}${by}. Roll the saw out on its mobile base before cutting, and lock the casters.`,
-          {
-            fixtureIds: run.blocker?.source === "fixture" ? [f.id, run.blocker.id] : [f.id],
-            zoneIds: [z.id],
-            measured: run.clearMm,
-            required: need,
-            shortfall: need - run.clearMm,
-            unit: "mm",
-            at: ok ? undefined : run.at,
-          },
-        ),
+        zoneRunFinding(ctx, f, z, {
+          ruleId: ID,
+          what: name,
+          zLo: table + n.flushToleranceMm,
+          zHi: table + n.stockThicknessMm,
+          advice: "Roll the saw out on its mobile base before cutting, and lock the casters.",
+        }),
       );
     }
   }
@@ -106,7 +91,5 @@ export const sawInfeedOutfeedRule: Rule<CheckContext> = {
     "Use the blade guard, riving knife and anti-kickback pawls; stand out of line with the blade.",
     "Lock the mobile base before cutting; a saw that rolls mid-cut is a kickback waiting to happen.",
   ],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

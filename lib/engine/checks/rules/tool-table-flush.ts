@@ -3,6 +3,7 @@ import { finding } from "../finding";
 import { convexPenetration, expandBounds, polygonBounds } from "../geom/polygon";
 import { isCounter, isMiterStation, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "table-flush";
 /** Counters this close beside a tool table count as its neighbours, mm (our own choice). */
@@ -52,7 +53,5 @@ export const tableFlushRule: Rule<CheckContext> = {
   sources: [{ citation: "Common shop practice; tolerance is a plan setting", status: "practice", note: "1/32 in is the tolerance of sheet-goods thickness in PS 1 and a common target for flush work." }],
   severity: "conflict",
   cautions: ["Check with a straightedge across both counters and the saw table after the saw is bolted down."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

@@ -5,6 +5,7 @@ import { finding } from "../finding";
 import { firstHitConvex, fromStrip, makeStrip, stripBounds, type Strip } from "../geom/strip";
 import { isFloorStanding } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "walkway";
 /** Things below this height narrow a walkway (6-1/2 ft, the same headroom NEC 110.26(A)(3) asks). */
@@ -83,7 +84,5 @@ export const walkwayRule: Rule<CheckContext> = {
   ],
   severity: "caution",
   cautions: ["Local building and fire codes may ask for more; they come first."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };

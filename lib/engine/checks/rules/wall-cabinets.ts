@@ -3,6 +3,7 @@ import { finding } from "../finding";
 import { convexPenetration, polygonBounds, prismPenetration } from "../geom/polygon";
 import { KIND, PURPOSE, isCounter, isWallHung, worldWorkSurface } from "../kinds";
 import type { Finding, Rule } from "../types";
+import { perFixture } from "../per-fixture";
 
 const ID = "wall-cabinet-clearance";
 
@@ -72,7 +73,5 @@ export const wallCabinetRule: Rule<CheckContext> = {
   sources: [{ citation: "Kitchen cabinet convention: wall cabinets 18 in above the counter", status: "practice" }],
   severity: "caution",
   cautions: ["Hang wall cabinets on a cleat or screws into studs; never on drywall anchors alone."],
-  scope: "fixture",
-  evaluate: (_plan, ctx) => check(ctx),
-  evaluateFor: (_plan, ctx, ids) => check(ctx, ids),
+  ...perFixture(check),
 };
