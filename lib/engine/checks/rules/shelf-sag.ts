@@ -2,7 +2,7 @@ import { shelfSag } from "../../sag/shelf-sag";
 import { stiffnessOf } from "../../sag/moe";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
-import { stiffnessKeyFor } from "../stiffness-key";
+import { stiffnessKeyFor } from "../../sag/stiffness-key";
 import type { Finding, Rule } from "../types";
 import { perFixture } from "../per-fixture";
 

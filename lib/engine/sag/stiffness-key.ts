@@ -1,9 +1,10 @@
 import type { Material } from "../plan/schema";
-import { stiffnessOf } from "../sag/moe";
+import { stiffnessOf } from "./moe";
 
+/** Words in a material's id, species or name that point to a row of the stiffness table (first match wins). */
 const GUESSES: [RegExp, string][] = [
   [/mdf/, "mdf-130"],
-  [/particle/, "particleboard-m2"],
+  [/particle|^pb-/, "particleboard-m2"],
   [/ply/, "plywood"],
   [/white[- ]?oak/, "white-oak"],
   [/oak/, "northern-red-oak"],
@@ -15,10 +16,18 @@ const GUESSES: [RegExp, string][] = [
   [/fir/, "douglas-fir-coast"],
 ];
 
-/** The stiffness-table key for a material id (and its entry in the plan, if any); plywood when nothing matches. */
+/**
+ * The stiffness-table key for a material id: the plan material's species when the table knows it
+ * (as written, or with spaces as dashes), else a guess from its id, species and name; plywood when
+ * nothing matches. The shelf-run fixture and the shelf-sag check both read it, so they agree.
+ */
 export function stiffnessKeyFor(materialId: string, materials: readonly Material[]): string {
   const m = materials.find((x) => x.id === materialId);
-  if (m?.species && stiffnessOf(m.species)) return m.species;
+  if (m?.species) {
+    if (stiffnessOf(m.species)) return m.species;
+    const dashed = m.species.toLowerCase().replace(/\s+/g, "-");
+    if (stiffnessOf(dashed)) return dashed;
+  }
   const text = `${materialId} ${m?.species ?? ""} ${m?.name ?? ""}`.toLowerCase();
   for (const [re, key] of GUESSES) if (re.test(text)) return key;
   return "plywood";
