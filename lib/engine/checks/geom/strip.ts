@@ -109,24 +109,6 @@ export function stripPolygon(s: Strip, length = s.length): Vec2[] {
   return [fromStrip(s, 0, s.vMin), fromStrip(s, length, s.vMin), fromStrip(s, length, s.vMax), fromStrip(s, 0, s.vMax)];
 }
 
-type UV = { u: number; v: number };
-
-function clip(pts: UV[], inside: (p: UV) => number): UV[] {
-  const out: UV[] = [];
-  for (let i = 0; i < pts.length; i++) {
-    const a = pts[i];
-    const b = pts[(i + 1) % pts.length];
-    const da = inside(a);
-    const db = inside(b);
-    if (da >= 0) out.push(a);
-    if ((da >= 0) !== (db >= 0)) {
-      const t = da / (da - db);
-      out.push({ u: a.u + (b.u - a.u) * t, v: a.v + (b.v - a.v) * t });
-    }
-  }
-  return out;
-}
-
 /**
  * Distance along the strip at which a convex polygon first enters it, mm (from u = 0, ignoring
  * anything behind the start); Infinity when it never does. `shrink` keeps things that only touch
@@ -153,16 +135,59 @@ export function firstHitConvex(s: Strip, poly: readonly Vec2[], shrink = 1): num
   if (vMax < lo || vMin > hi || uMax < 0) return Infinity;
   // Wholly inside the band across: the nearest corner along it, or 0 when it straddles the start.
   if (vMin >= lo && vMax <= hi) return Math.max(0, uMin);
-  let pts: UV[] = poly.map((p) => toStrip(s, p));
-  pts = clip(pts, (p) => p.v - (s.vMin + shrink));
-  if (!pts.length) return Infinity;
-  pts = clip(pts, (p) => s.vMax - shrink - p.v);
-  if (!pts.length) return Infinity;
-  pts = clip(pts, (p) => p.u);
-  if (!pts.length) return Infinity;
-  let m = Infinity;
-  for (const p of pts) m = Math.min(m, p.u);
-  return m;
+  return clippedMinU(s, poly, lo, hi);
+}
+
+/**
+ * Smallest u of the part of a convex polygon inside the band lo <= v <= hi and u >= 0, Infinity
+ * when none. That part's corners are the polygon's corners inside, its edges' crossings of the
+ * three boundary lines, and the band's two corners at u = 0 when the polygon covers them; so the
+ * smallest of those is the answer. Scalars only: this runs for most neighbours of every strip.
+ */
+function clippedMinU(s: Strip, poly: readonly Vec2[], lo: number, hi: number): number {
+  const n = poly.length;
+  if (n < 3) return Infinity;
+  // Winding (the strip frame is a rotation, so it keeps the world winding).
+  let area = 0;
+  for (let i = 0; i < n; i++) {
+    const p = poly[i];
+    const q = poly[(i + 1) % n];
+    area += p.x * q.y - q.x * p.y;
+  }
+  const orient = area >= 0 ? 1 : -1;
+  let best = Infinity;
+  let coversLo = true;
+  let coversHi = true;
+  const ox = s.origin.x;
+  const oy = s.origin.y;
+  for (let i = 0; i < n; i++) {
+    const p = poly[i];
+    const q = poly[(i + 1) % n];
+    const pu = (p.x - ox) * s.u.x + (p.y - oy) * s.u.y;
+    const pv = (p.x - ox) * s.v.x + (p.y - oy) * s.v.y;
+    const qu = (q.x - ox) * s.u.x + (q.y - oy) * s.u.y;
+    const qv = (q.x - ox) * s.v.x + (q.y - oy) * s.v.y;
+    if (pv >= lo && pv <= hi && pu >= 0 && pu < best) best = pu;
+    if ((pv - lo) * (qv - lo) < 0) {
+      const u = pu + ((qu - pu) * (lo - pv)) / (qv - pv);
+      if (u >= 0 && u < best) best = u;
+    }
+    if ((pv - hi) * (qv - hi) < 0) {
+      const u = pu + ((qu - pu) * (hi - pv)) / (qv - pv);
+      if (u >= 0 && u < best) best = u;
+    }
+    if (pu * qu < 0) {
+      const v = pv - ((qv - pv) * pu) / (qu - pu);
+      if (v >= lo && v <= hi && best > 0) best = 0;
+    }
+    // Is each band corner (0, lo), (0, hi) on the inner side of this edge?
+    const eu = qu - pu;
+    const ev = qv - pv;
+    if ((eu * (lo - pv) + ev * pu) * orient < 0) coversLo = false;
+    if ((eu * (hi - pv) + ev * pu) * orient < 0) coversHi = false;
+  }
+  if ((coversLo || coversHi) && best > 0) best = 0;
+  return best;
 }
 
 /** Distance along the strip at which a segment (a wall) first crosses it, mm; Infinity when it does not. */
