@@ -137,7 +137,7 @@ test("adopting a class preset in the editor is an edit saved with the plan, and 
 
   await page.getByRole("tab", { name: "Room" }).click();
   await page.getByTestId("plan-settings").locator("summary").click();
-  await page.getByLabel("Preset").selectOption({ label: `${presetName} · Ines Larch` });
+  await page.getByTestId("plan-settings").getByLabel("Preset").selectOption({ label: `${presetName} · Ines Larch` });
   await expect(page.getByTestId("preset-in-force")).toContainText(presetName);
   await expect.poll(failingWalkways).toBeGreaterThan(before);
   // Saved by the editor's autosave with its version: no conflict, and the server now names the preset.
