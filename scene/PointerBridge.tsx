@@ -108,6 +108,7 @@ export function PointerBridge() {
         if (!hoverFrame) hoverFrame = requestAnimationFrame(hover);
         return;
       }
+      if (hoverAt || ed.ui.getState().hoveredZone) clearHover();
       const input = toInput(e, tool === "placing");
       if (input) ed.tools.move(input);
     };
@@ -128,9 +129,12 @@ export function PointerBridge() {
     el.addEventListener("pointerup", up);
     el.addEventListener("pointercancel", up);
     el.addEventListener("pointerleave", clearHover);
+    // Zooming moves the view under a still pointer: the card would point at the wrong place.
+    el.addEventListener("wheel", clearHover, { passive: true });
     return () => {
       clearHover();
       el.removeEventListener("pointerleave", clearHover);
+      el.removeEventListener("wheel", clearHover);
       el.removeEventListener("pointerdown", down, { capture: true });
       el.removeEventListener("pointermove", move);
       el.removeEventListener("pointerup", up);
