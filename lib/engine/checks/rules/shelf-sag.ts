@@ -5,6 +5,8 @@ import { finding } from "../finding";
 import { stiffnessKeyFor } from "../../sag/stiffness-key";
 import type { Finding, Rule } from "../types";
 import { perFixture } from "../per-fixture";
+import { partFacts } from "../part-facts";
+import type { Part } from "../../fixtures/types";
 
 const ID = "shelf-sag";
 const LB_PER_KG = 1 / 0.45359237;
@@ -15,56 +17,62 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const n = ctx.numbers;
   const note = ctx.presetNote("sagLimitMmPerM", "shelfLoadKgPerM");
   const lbPerFt = (n.shelfLoadKgPerM * LB_PER_KG) / FT_PER_M;
-  // One finding per distinct shelf size in a fixture: identical shelves sag alike.
-  const seen = new Set<string>();
   // A shelf run says its own load and stiffness; other shelves carry the rule's book load.
-  const runs = new Map<string, ReturnType<typeof runLoad>>();
+  const runs = new Map<string, RunLoad | undefined>();
   for (const d of ctx.plan.fixtures) if (d.kind === "shelf-run") runs.set(d.id, runLoad(d.params));
   const stiffByMaterial = new Map<string, string>();
-  for (const p of ctx.parts) {
-    if ((ids && !ids.has(p.fixtureId)) || !isShelf(p.name)) continue;
-    const key = `${p.fixtureId}|${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    const rp = runs.get(p.fixtureId);
-    let stiff = rp?.stiffnessKey ?? stiffByMaterial.get(p.materialId);
-    if (!stiff) {
-      stiff = stiffnessKeyFor(p.materialId, ctx.plan.materials);
-      stiffByMaterial.set(p.materialId, stiff);
-    }
-    const load = rp ? rp.loadLbPerFt : lbPerFt;
-    const r = shelfSag({
-      spanMm: p.lengthMm,
-      depthMm: p.widthMm,
-      thicknessMm: p.thicknessMm,
-      stiffnessKey: stiff,
-      uniformLbPerFt: load,
-      centreLoadLb: rp?.centreLoadLb,
-      longTerm: rp?.longTerm,
-    });
-    const limitMm = (n.sagLimitMmPerM * p.lengthMm) / 1000;
-    const ok = r.deflectionMm <= limitMm + 1e-9;
-    const f = ctx.fixtureById.get(p.fixtureId);
-    const who = `${f?.label ?? p.fixtureId}: ${p.name.toLowerCase()} ${ctx.len(p.lengthMm)} span`;
-    const mat = stiffnessOf(stiff)?.name ?? stiff;
-    out.push(
-      finding(
-        ID,
-        "caution",
-        ok,
-        p.fixtureId,
-        ok
-          ? `${who} sags ${r.deflectionIn.toFixed(3)} in under ${load.toFixed(0)} lb/ft${rp?.longTerm ? ", long term" : ""} (${mat}); within ${limitIn(limitMm)} in${note}.`
-          : `${who} sags ${r.deflectionIn.toFixed(3)} in under ${load.toFixed(0)} lb/ft${rp?.longTerm ? ", long term" : ""} (${mat}), over the ${limitIn(limitMm)} in guide${note}: shorten the span, add a stiffening edge, or use thicker stock.`,
-        { fixtureIds: [p.fixtureId], measured: r.deflectionMm, required: limitMm, shortfall: r.deflectionMm - limitMm, unit: "mm" },
-      ),
-    );
+  // One finding per distinct shelf size in a fixture: identical shelves sag alike.
+  for (const facts of partFacts(ctx.parts)) {
+    if (ids && !ids.has(facts.fixtureId)) continue;
+    for (const p of facts.shelves) out.push(shelfFinding(ctx, p, runs.get(p.fixtureId), stiffByMaterial, lbPerFt, note));
   }
   return out;
 }
 
+/** The sag finding of one shelf. */
+function shelfFinding(ctx: CheckContext, p: Part, rp: RunLoad | undefined, stiffByMaterial: Map<string, string>, bookLoad: number, note: string): Finding {
+  let stiff = rp?.stiffnessKey ?? stiffByMaterial.get(p.materialId);
+  if (!stiff) {
+    stiff = stiffnessKeyFor(p.materialId, ctx.plan.materials);
+    stiffByMaterial.set(p.materialId, stiff);
+  }
+  const load = rp ? rp.loadLbPerFt : bookLoad;
+  const r = shelfSag({
+    spanMm: p.lengthMm,
+    depthMm: p.widthMm,
+    thicknessMm: p.thicknessMm,
+    stiffnessKey: stiff,
+    uniformLbPerFt: load,
+    centreLoadLb: rp?.centreLoadLb,
+    longTerm: rp?.longTerm,
+  });
+  const limitMm = (ctx.numbers.sagLimitMmPerM * p.lengthMm) / 1000;
+  const ok = r.deflectionMm <= limitMm + 1e-9;
+  const f = ctx.fixtureById.get(p.fixtureId);
+  const who = `${f?.label ?? p.fixtureId}: ${p.name.toLowerCase()} ${ctx.len(p.lengthMm)} span`;
+  const mat = stiffnessOf(stiff)?.name ?? stiff;
+  const under = `sags ${r.deflectionIn.toFixed(3)} in under ${load.toFixed(0)} lb/ft${rp?.longTerm ? ", long term" : ""} (${mat})`;
+  return finding(
+    ID,
+    "caution",
+    ok,
+    p.fixtureId,
+    ok
+      ? `${who} ${under}; within ${limitIn(limitMm)} in${note}.`
+      : `${who} ${under}, over the ${limitIn(limitMm)} in guide${note}: shorten the span, add a stiffening edge, or use thicker stock.`,
+    { fixtureIds: [p.fixtureId], measured: r.deflectionMm, required: limitMm, shortfall: r.deflectionMm - limitMm, unit: "mm" },
+  );
+}
+
+interface RunLoad {
+  loadLbPerFt: number;
+  centreLoadLb?: number;
+  longTerm?: boolean;
+  stiffnessKey?: string;
+}
+
 /** A shelf run's own load and stiffness, read from its parameters as parsePlan left them (defaults filled in). */
-function runLoad(params: Record<string, unknown>): { loadLbPerFt: number; centreLoadLb?: number; longTerm?: boolean; stiffnessKey?: string } | undefined {
+function runLoad(params: Record<string, unknown>): RunLoad | undefined {
   const load = params.loadLbPerFt;
   if (typeof load !== "number" || !Number.isFinite(load) || load < 0) return undefined;
   const centre = params.centreLoadLb;
@@ -75,17 +83,6 @@ function runLoad(params: Record<string, unknown>): { loadLbPerFt: number; centre
     longTerm: params.longTerm === true,
     stiffnessKey: typeof key === "string" && stiffnessOf(key) ? key : undefined,
   };
-}
-
-/** Part names repeat (a few dozen across a shop): each is tested once. */
-const shelfNames = new Map<string, boolean>();
-function isShelf(name: string): boolean {
-  let v = shelfNames.get(name);
-  if (v === undefined) {
-    v = /shelf/i.test(name);
-    if (shelfNames.size < 10_000) shelfNames.set(name, v);
-  }
-  return v;
 }
 
 const limitIn = (mmValue: number) => (mmValue / 25.4).toFixed(3);

@@ -1,19 +1,5 @@
-import type { Part } from "../../fixtures/types";
 import { cautionRule } from "../caution-rule";
-
-const LAMINATE = /laminate|contact cement/i;
-
-/** The test per text: parts repeat a few dozen names, materials and joinery notes, so each is tested once. */
-const memo = new Map<string, boolean>();
-const mentions = (text: string) => {
-  let v = memo.get(text);
-  if (v === undefined) {
-    v = LAMINATE.test(text);
-    if (memo.size < 10_000) memo.set(text, v);
-  }
-  return v;
-};
-const calls = (p: Part) => mentions(p.name) || mentions(p.materialId) || p.joinery.some(mentions);
+import { laminateHardware, partFacts } from "../part-facts";
 
 /** Advice: ventilate when gluing laminate with solvent contact cement. */
 export const solventFumesRule = cautionRule({
@@ -28,9 +14,8 @@ export const solventFumesRule = cautionRule({
   ],
   cautions: ["Open the big door, run a fan blowing out, put out pilot lights and unplug tools; or use a water-based contact cement."],
   applies: (ctx) => {
-    const ids = new Set<string>();
-    for (const p of ctx.parts) if (calls(p)) ids.add(p.fixtureId);
-    for (const h of ctx.hardware) if (mentions(h.name) || mentions(h.key)) ids.add(h.fixtureId);
+    const ids = laminateHardware(ctx.hardware);
+    for (const f of partFacts(ctx.parts)) if (f.laminate) ids.add(f.fixtureId);
     return [...ids];
   },
   message: () => "Laminate is glued with contact cement: ventilate the garage, put out pilot lights and other ignition sources while the solvent flashes off.",
