@@ -110,6 +110,12 @@ test("hover a keep-clear zone for its numbers; drag a cabinet onto another wall;
   await page.keyboard.press("Control+z");
   const undone = await page.evaluate((fid) => (window.__bwEditor as unknown as Ed).doc.fixtures.find((f) => f.id === fid)!.placement, id);
   expect(undone).toEqual(before);
+
+  // 4. The owner finds the share page from the editor; the elevation view lists the wall's photos.
+  await expect(page.getByTestId("share-link")).toHaveAttribute("href", /\/plans\/[0-9a-f-]{36}\/share$/);
+  await expect(page.getByTestId("elevation-photos")).toHaveCount(0);
+  await page.getByRole("button", { name: "Elevation", exact: true }).click();
+  await expect(page.getByTestId("elevation-photos")).toContainText("Photos of this wall");
 });
 
 test("adopting a class preset in the editor is an edit saved with the plan, and the live checks use its numbers", async ({ page }) => {
