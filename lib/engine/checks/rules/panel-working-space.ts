@@ -19,13 +19,15 @@ export function requiredPanelDepth(n: RuleNumbers, p: Pick<Panel, "voltageClass"
 function check(ctx: CheckContext): Finding[] {
   const out: Finding[] = [];
   const n = ctx.numbers;
-  for (const p of ctx.plan.room.obstacles) {
-    if (p.kind !== "panel") continue;
+  const panels = ctx.plan.room.obstacles.filter((o): o is Panel => o.kind === "panel");
+  for (const [i, p] of panels.entries()) {
     const work = ctx.zones.find((z) => z.id === `${p.id}:working-space`);
     const ded = ctx.zones.find((z) => z.id === `${p.id}:dedicated-space`);
     const body = ctx.obstacles.find((o) => o.id === p.id);
     if (!work || !body) continue;
-    const label = `Panel ${p.id}`;
+    // Panels have no name of their own: number them in plan order when there are several.
+    const named = panels.length > 1 ? `electrical panel ${i + 1}` : "the electrical panel";
+    const label = named[0].toUpperCase() + named.slice(1);
     const top = body.body.zMax;
     const depth = requiredPanelDepth(n, p);
     const width = Math.max(n.panelMinWidthMm, p.widthMm);
@@ -92,7 +94,7 @@ function check(ctx: CheckContext): Finding[] {
         const pen = prismPenetration(ded.prism, s.prism);
         if (pen <= n.collisionToleranceMm) continue;
         out.push(
-          finding(ID, "conflict", false, p.id, `${s.label} is in the space reserved above and below ${label} (NEC 110.26(E)(1)(a)): keep the panel's width and depth clear from the floor to 6 ft above it.`, {
+          finding(ID, "conflict", false, p.id, `${s.label} is in the space reserved above and below ${named} (NEC 110.26(E)(1)(a)): keep the panel's width and depth clear from the floor to 6 ft above it.`, {
             fixtureIds: s.source === "fixture" ? [s.id] : [],
             zoneIds: [ded.id],
             measured: pen,
