@@ -1,28 +1,37 @@
 "use client";
 import { Html, Line } from "@react-three/drei";
+import { memo, useMemo } from "react";
 import type { SolvedWall } from "@/lib/engine/room/types";
 import { useEditor } from "@/lib/client/react/EditorContext";
 import { useDerived, useDoc, useUi } from "@/lib/client/react/useEditorState";
 
 type P3 = [number, number, number];
 
-/** A dimension line from a to b along a wall, offset by `off` mm (negative: outside the room), with end ticks and a label. */
-function Dim({ wall, from, to, off, text, testId }: { wall: SolvedWall; from: number; to: number; off: number; text: string; testId?: string }) {
-  const at = (t: number, o: number): P3 => [wall.start.x + wall.dir.x * t + wall.inward.x * o, wall.start.y + wall.dir.y * t + wall.inward.y * o, 5];
-  const tick = 60;
+/**
+ * A dimension line from a to b along a wall, offset by `off` mm (negative: outside the room), with
+ * end ticks and a label. Memoised with its points: drei's Line disposes its material whenever its
+ * points array changes, and when every line did so in one frame three dropped and recompiled the
+ * line shader on each drag step.
+ */
+const Dim = memo(function Dim({ wall, from, to, off, text, testId }: { wall: SolvedWall; from: number; to: number; off: number; text: string; testId?: string }) {
+  const pts = useMemo(() => {
+    const at = (t: number, o: number): P3 => [wall.start.x + wall.dir.x * t + wall.inward.x * o, wall.start.y + wall.dir.y * t + wall.inward.y * o, 5];
+    const tick = 60;
+    return { line: [at(from, off), at(to, off)], a: [at(from, off - tick), at(from, off + tick)], b: [at(to, off - tick), at(to, off + tick)], label: at((from + to) / 2, off) };
+  }, [wall, from, to, off]);
   return (
     <group>
-      <Line points={[at(from, off), at(to, off)]} color="#2a1c12" lineWidth={1.2} />
-      <Line points={[at(from, off - tick), at(from, off + tick)]} color="#2a1c12" lineWidth={1.2} />
-      <Line points={[at(to, off - tick), at(to, off + tick)]} color="#2a1c12" lineWidth={1.2} />
-      <Html position={at((from + to) / 2, off)} center className="pointer-events-none">
+      <Line points={pts.line} color="#2a1c12" lineWidth={1.2} />
+      <Line points={pts.a} color="#2a1c12" lineWidth={1.2} />
+      <Line points={pts.b} color="#2a1c12" lineWidth={1.2} />
+      <Html position={pts.label} center className="pointer-events-none">
         <span className="whitespace-nowrap rounded bg-paper px-1 text-[11px] font-semibold text-walnut-900" data-testid={testId}>
           {text}
         </span>
       </Html>
     </group>
   );
-}
+});
 
 /** Plan and elevation dimensions: every wall's length outside the room; the selected wall fixture's distances to the wall ends. */
 export function DimensionLines() {

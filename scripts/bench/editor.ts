@@ -37,7 +37,7 @@ async function reachable(): Promise<boolean> {
  * each step. Kept as source text: the TypeScript runner would wrap named functions in helpers the
  * page does not have.
  */
-const DRAG_IN_PAGE = `async (steps) => {
+export const DRAG_IN_PAGE = `async (steps) => {
   const ed = window.__bwEditor;
   const canvas = document.querySelector("[data-testid=plan-canvas] canvas");
   const nextTask = () => new Promise((r) => { const ch = new MessageChannel(); ch.port1.onmessage = () => r(); ch.port2.postMessage(0); });
