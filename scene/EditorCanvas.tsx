@@ -21,12 +21,20 @@ import { ZoneTooltip } from "./ZoneTooltip";
  * The provider is repeated inside because the canvas renders in its own React root. The zone
  * hover card is a DOM overlay beside the canvas (the parent is positioned).
  */
+/**
+ * The scene takes no pointer events of its own: PointerBridge handles them. Left on, the fiber
+ * event system read the pointer's offset on every move, which forces a page layout after each
+ * React update (a few ms a drag step).
+ */
+const noSceneEvents = () => ({ enabled: false, priority: 0 });
+
 export default function EditorCanvas({ editor, label }: { editor: Editor; label: string }) {
   return (
     <>
       <Canvas
         data-testid="plan-canvas"
         frameloop="demand"
+        events={noSceneEvents}
         dpr={[1, 1.5]}
         gl={{ preserveDrawingBuffer: true, antialias: true }}
         tabIndex={0}

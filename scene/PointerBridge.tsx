@@ -4,7 +4,7 @@ import { useEffect } from "react";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import type { PointerInput } from "@/lib/client/tools/types";
 import { useEditor } from "@/lib/client/react/EditorContext";
-import { aim, onLevel, onWallPlane, pickHit, wallNear } from "./pick";
+import { aim, canvasRect, onLevel, onWallPlane, pickHit, wallNear } from "./pick";
 import { zoneUnderRay } from "./zone-hover";
 
 /**
@@ -61,7 +61,7 @@ export function PointerBridge() {
       const at = hoverAt;
       if (!at || ed.ui.getState().tool !== "idle") return;
       const id = zoneUnderRay(aim(at, el, camera), scene.getObjectByName("zones"), ed.derived.getState().findings);
-      const r = el.getBoundingClientRect();
+      const r = canvasRect(el);
       const prev = ed.ui.getState().hoveredZone;
       if (!id) {
         if (prev) ed.ui.setState({ hoveredZone: null });

@@ -8,9 +8,36 @@ const raycaster = new Raycaster();
 const ndc = new Vector2();
 const hitPoint = new Vector3();
 
+/**
+ * The element's box on screen, kept between pointer moves: reading it after React changed the DOM
+ * forces a layout of the whole page, which cost several ms a drag step. Dropped when the element
+ * resizes, the window scrolls or resizes, and at each press or entry of the pointer.
+ */
+let rectVersion = 0;
+const rects = new WeakMap<HTMLElement, { rect: DOMRect; version: number }>();
+const watched = new WeakSet<HTMLElement>();
+let listening = false;
+
+export function canvasRect(el: HTMLElement): DOMRect {
+  const hit = rects.get(el);
+  if (hit && hit.version === rectVersion) return hit.rect;
+  if (!listening && typeof window !== "undefined") {
+    listening = true;
+    const bump = () => rectVersion++;
+    for (const type of ["scroll", "resize", "pointerdown", "pointerover"]) window.addEventListener(type, bump, { capture: true, passive: true });
+  }
+  if (!watched.has(el) && typeof ResizeObserver !== "undefined") {
+    watched.add(el);
+    new ResizeObserver(() => rectVersion++).observe(el);
+  }
+  const rect = el.getBoundingClientRect();
+  rects.set(el, { rect, version: rectVersion });
+  return rect;
+}
+
 /** Sets the ray from a pointer position on the canvas element. */
 export function aim(e: { clientX: number; clientY: number }, el: HTMLElement, camera: Camera): Raycaster {
-  const r = el.getBoundingClientRect();
+  const r = canvasRect(el);
   ndc.set(((e.clientX - r.left) / r.width) * 2 - 1, -((e.clientY - r.top) / r.height) * 2 + 1);
   raycaster.setFromCamera(ndc, camera);
   return raycaster;
