@@ -17,7 +17,8 @@ export function analyseForReading(doc: PlanDocument, preset: { name: string; num
   try {
     const derived = derivePlan(doc);
     const findings = evaluatePlan(doc, derived, preset ? { preset: preset.numbers, presetLabel: preset.name } : {});
-    return { findings, error: null };
+    // The engine builds findings with a constructor; pages hand them to client components, which take plain objects only.
+    return { findings: findings.map((f) => ({ ...f })), error: null };
   } catch (e) {
     console.error("read-only analysis failed", e);
     return { findings: [], error: "The checks could not run on this plan." };
