@@ -1,5 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { randomUUID } from "node:crypto";
+import { addPanel } from "./room-steps";
 
 /*
  * The editor's pointer work that only a browser shows: hovering a keep-clear zone opens a card with
@@ -44,11 +45,7 @@ test("hover a keep-clear zone for its numbers; drag a cabinet onto another wall;
 
   // An electrical panel on the back wall (wall 3), 120 in from its start, and a base cabinet right in front of it.
   await page.getByRole("tab", { name: "Room" }).click();
-  await page.getByRole("button", { name: "Add electrical panel" }).click();
-  const panel = page.locator("details").filter({ hasText: "Electrical panel" });
-  await panel.getByLabel("Where").selectOption({ label: "Wall 3 (Back wall)" });
-  await panel.getByLabel("From wall start").fill("120");
-  await panel.getByLabel("From wall start").press("Enter");
+  await addPanel(page, "Wall 3 (Back wall)", "120");
   await page.getByRole("tab", { name: "Layout" }).click();
   await page.getByLabel("Wall", { exact: true }).selectOption({ label: "Wall 3 (Back wall)" });
   await page.getByLabel("Fixture", { exact: true }).selectOption({ label: "Base cabinet" });

@@ -1,5 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { randomUUID } from "node:crypto";
+import { addPanel } from "./room-steps";
 
 /*
  * The room editor end to end: a room typed as measured, a base run with a miter-saw tool shelf,
@@ -67,11 +68,7 @@ test("enter a room, build a saw station with live checks, drag into the panel sp
   // 240 1/4 in = 6102.35 mm; 22 ft = 264 in = 6705.6 mm (1 in = 25.4 mm exactly, NIST SP 811).
   await expect.poll(() => page.evaluate(() => window.__bwEditor!.doc.room.walls.map((w) => Math.round(w.lengthMm * 100)))).toEqual([610235, 670560, 610235, 670560]);
   // An electrical panel on the back wall (wall 3), 10 ft from its start.
-  await page.getByRole("button", { name: "Add electrical panel" }).click();
-  const panel = page.locator("details").filter({ hasText: "Electrical panel" });
-  await panel.getByLabel("Where").selectOption({ label: "Wall 3 (Back wall)" });
-  await panel.getByLabel("From wall start").fill("120");
-  await panel.getByLabel("From wall start").press("Enter");
+  await addPanel(page, "Wall 3 (Back wall)", "120");
 
   // 2. A base run on the back wall: cabinet, miter-saw tool shelf, cabinet, each placed at the next free spot.
   await page.getByRole("tab", { name: "Layout" }).click();
