@@ -1,5 +1,10 @@
 "use client";
-import { Html, Line } from "@react-three/drei";
+import { Html } from "@react-three/drei";
+import { useThree } from "@react-three/fiber";
+import { useEffect, useState } from "react";
+import { Line2 } from "three/examples/jsm/lines/Line2.js";
+import { LineGeometry } from "three/examples/jsm/lines/LineGeometry.js";
+import { LineMaterial } from "three/examples/jsm/lines/LineMaterial.js";
 import type { Placement } from "@/lib/engine/plan/schema";
 import type { SolvedWall } from "@/lib/engine/room/types";
 import { useEditor } from "@/lib/client/react/EditorContext";
@@ -30,21 +35,49 @@ export function Ghost() {
   );
 }
 
-/** The tape measure's line and reading. */
+/**
+ * The tape measure's line and reading. One line object for the whole measurement, its points set
+ * in place: drei's Line makes a new geometry and disposes its material on each new points array,
+ * and when it is the only wide line on screen (the 3D view) three then recompiles its shader on
+ * every pointer move.
+ */
 export function TapeLine() {
   const ed = useEditor();
   const m = useUi((s) => s.measurement);
+  const size = useThree((s) => s.size);
+  const invalidate = useThree((s) => s.invalidate);
+  const [line] = useState(() => new Line2(new LineGeometry(), new LineMaterial({ color: 0xd99a1e, linewidth: 3, dashSize: 40, gapSize: 20 })));
+  useEffect(() => () => {
+    line.geometry.dispose();
+    line.material.dispose();
+  }, [line]);
+  useEffect(() => {
+    line.material.resolution.set(size.width, size.height);
+  }, [line, size.width, size.height]);
+  useEffect(() => {
+    if (!m) return;
+    drawTape(line, m);
+    invalidate();
+  }, [line, m, invalidate]);
   if (!m) return null;
   const len = Math.hypot(m.to.x - m.from.x, m.to.y - m.from.y);
-  const z = 20;
   return (
     <group>
-      <Line points={[[m.from.x, m.from.y, z], [m.to.x, m.to.y, z]]} color="#d99a1e" lineWidth={3} dashed={!m.done} dashSize={40} gapSize={20} />
-      <Html position={[(m.from.x + m.to.x) / 2, (m.from.y + m.to.y) / 2, z]} center className="pointer-events-none">
-        <span className="rounded bg-amberline-100 px-1 text-xs font-semibold text-walnut-900 shadow" data-testid="tape-reading">
+      <primitive object={line} />
+      <Html position={[(m.from.x + m.to.x) / 2, (m.from.y + m.to.y) / 2, TAPE_Z]} center className="pointer-events-none">
+        <span className="whitespace-nowrap rounded bg-amberline-100 px-1 text-xs font-semibold text-walnut-900 shadow" data-testid="tape-reading">
           {ed.formatLength(len)}
         </span>
       </Html>
     </group>
   );
+}
+
+const TAPE_Z = 20;
+
+/** Puts the tape's two ends into its line, in place; dashed while the tape is still being pulled. */
+function drawTape(line: Line2, m: { from: { x: number; y: number }; to: { x: number; y: number }; done: boolean }): void {
+  line.geometry.setPositions([m.from.x, m.from.y, TAPE_Z, m.to.x, m.to.y, TAPE_Z]);
+  line.computeLineDistances();
+  line.material.dashed = !m.done;
 }
