@@ -1,6 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { randomUUID } from "node:crypto";
-import { addPanel } from "./room-steps";
+import { addPanel, signIn } from "./steps";
 
 /*
  * The editor's pointer work that only a browser shows: hovering a keep-clear zone opens a card with
@@ -16,14 +16,6 @@ type Ed = {
   wall(id: string): Wall;
   derived: { getState(): { derived: { zones: { id: string; purpose: string; prism: { polygon: { x: number; y: number }[]; zMax: number } }[] } } };
 };
-
-async function signIn(page: Page) {
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill("robin@demo.benchwright.test");
-  await page.getByLabel("Password").fill("sawdust-and-pine-42");
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).toHaveURL(/\/plans$/, { timeout: 60_000 });
-}
 
 /** Page pixels of a zone's centre, at its top (the plan view looks straight down). */
 async function zoneCentre(page: Page, purpose: string) {

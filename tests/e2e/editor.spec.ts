@@ -1,6 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { randomUUID } from "node:crypto";
-import { addPanel } from "./room-steps";
+import { addPanel, signIn } from "./steps";
 
 /*
  * The room editor end to end: a room typed as measured, a base run with a miter-saw tool shelf,
@@ -17,14 +17,6 @@ declare global {
   interface Window {
     __bwEditor?: Ed;
   }
-}
-
-async function signIn(page: Page) {
-  await page.goto("/signin");
-  await page.getByLabel("E-mail").fill("robin@demo.benchwright.test");
-  await page.getByLabel("Password").fill("sawdust-and-pine-42");
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page).toHaveURL(/\/plans$/, { timeout: 60_000 });
 }
 
 async function typeLength(page: Page, testId: string, text: string) {

@@ -10,6 +10,7 @@ export interface FixturePartFacts {
 }
 
 const LAMINATE = /laminate|contact cement/i;
+const SHELF = /shelf/i;
 
 /** Part and hardware texts repeat (a few dozen across a shop): each is tested once. */
 const texts = new Map<string, boolean>();
@@ -32,7 +33,7 @@ function factsOf(run: readonly Part[]): FixturePartFacts {
   let laminate = false;
   for (const p of run) {
     if (!laminate) laminate = mentionsLaminate(p.name) || mentionsLaminate(p.materialId) || p.joinery.some(mentionsLaminate);
-    if (!test(/shelf/i, shelfNames, p.name)) continue;
+    if (!test(SHELF, shelfNames, p.name)) continue;
     const key = `${Math.round(p.lengthMm)}|${Math.round(p.widthMm)}|${p.thicknessMm}|${p.materialId}`;
     if (seen.has(key)) continue;
     seen.add(key);
