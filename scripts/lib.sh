@@ -140,6 +140,8 @@ build_app() {
   fi
   log "building the app (next build into $dist)"
   BW_DIST_DIR="$dist" ./node_modules/.bin/next build
+  # Server-side engine worker (a plain JS bundle the worker pool loads), when the project has one.
+  if [ -f scripts/build-worker.ts ]; then ./node_modules/.bin/tsx scripts/build-worker.ts "$dist"; fi
   echo "$h" >"$dist/.bw-source-hash"
 }
 
