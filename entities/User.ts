@@ -1,4 +1,4 @@
-import { EntitySchema } from "@mikro-orm/core";
+import { EntitySchema, type Opt } from "@mikro-orm/core";
 import type { BaseRow } from "./base";
 
 export const ACCOUNT_ROLES = ["member", "instructor", "admin"] as const;
@@ -10,6 +10,13 @@ export interface User extends BaseRow {
   passwordHash: string;
   role: AccountRole;
   emailVerifiedAt?: Date | null;
+  /**
+   * Carried in every session cookie; raising it (sign-out, password reset or change, disable) ends
+   * every session issued before.
+   */
+  sessionVersion: Opt<number>;
+  /** Set by an administrator: the account cannot sign in and its sessions are over. */
+  disabledAt?: Date | null;
   updatedAt: Date;
 }
 
@@ -23,6 +30,8 @@ export const UserSchema = new EntitySchema<User, BaseRow>({
     passwordHash: { type: "string", length: 100, lazy: true },
     role: { type: "string", length: 16, default: "member" },
     emailVerifiedAt: { type: "datetime", columnType: "timestamptz", nullable: true },
+    sessionVersion: { type: "integer", default: 1 },
+    disabledAt: { type: "datetime", columnType: "timestamptz", nullable: true },
     updatedAt: { type: "datetime", columnType: "timestamptz", onCreate: () => new Date(), onUpdate: () => new Date() },
   },
 });
