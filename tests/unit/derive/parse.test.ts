@@ -25,7 +25,7 @@ describe("parsePlan", () => {
     const paths = r.issues.map((i) => i.path);
     expect(paths).toContain("fixtures.1.params.widthMm");
     expect(paths).toContain("fixtures.1.params.sections.0.drawerCount");
-    expect(r.issues.find((i) => i.path === "fixtures.1.params.widthMm")!.message).toMatch(/greater than zero/);
+    expect(r.issues.find((i) => i.path === "fixtures.1.params.widthMm")!.message).toMatch(/^At least 6 in \(152.4 mm\): /);
   });
 
   it("reports document problems with their paths", () => {
