@@ -1,0 +1,50 @@
+import "server-only";
+import { AsyncLocalStorage } from "node:async_hooks";
+import pino from "pino";
+import { describeError } from "./log-safe";
+
+/** The request a log line belongs to; route() opens one scope per request. */
+interface RequestScope {
+  requestId: string;
+}
+
+const scope = new AsyncLocalStorage<RequestScope>();
+
+/** Keys whose values never reach the log, at any of the first three levels of a logged object. */
+const SECRET_KEYS = ["password", "passwordHash", "password_hash", "token", "secret", "cookie", "authorization", "csrfToken", "sessionToken", "set-cookie"];
+const redactPaths = SECRET_KEYS.flatMap((k) => {
+  const key = /^[A-Za-z_$][\w$]*$/.test(k) ? k : `["${k}"]`;
+  const dot = key.startsWith("[") ? "" : ".";
+  return [key, `*${dot}${key}`, `*.*${dot}${key}`];
+});
+
+const g = globalThis as unknown as { __bwLog?: pino.Logger };
+
+/**
+ * The server's logger: one JSON line per event, with the request id of the request it belongs to.
+ * Log errors through logError (never the raw error object: driver errors carry SQL with its parameters).
+ */
+export const log: pino.Logger = (g.__bwLog ??= pino({
+  level: process.env.LOG_LEVEL ?? "info",
+  base: { pid: process.pid },
+  redact: { paths: redactPaths, censor: "[redacted]" },
+  mixin() {
+    const s = scope.getStore();
+    return s ? { requestId: s.requestId } : {};
+  },
+}));
+
+/** Runs fn with every log line inside it tagged with the request id. */
+export function withRequestScope<T>(requestId: string, fn: () => T): T {
+  return scope.run({ requestId }, fn);
+}
+
+/** The id of the request being served, if any. */
+export function currentRequestId(): string | undefined {
+  return scope.getStore()?.requestId;
+}
+
+/** Logs a caught error by class, code and a message with SQL and its parameters removed. */
+export function logError(msg: string, e: unknown, extra: Record<string, unknown> = {}): void {
+  log.error({ ...extra, err: describeError(e) }, msg);
+}
