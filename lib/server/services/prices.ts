@@ -1,3 +1,4 @@
+import { randomUUID } from "node:crypto";
 import type { EntityManager } from "@mikro-orm/postgresql";
 import { PriceListSchema } from "@/entities/PriceList";
 import type { User } from "@/entities/User";
@@ -25,18 +26,18 @@ export async function getPriceList(em: EntityManager, user: User): Promise<Price
   return { currency: "USD", items, isDefault: false, updatedAt: row.updatedAt.toISOString() };
 }
 
-/** Replace the account's price list (validated by the caller with priceListSchema). */
+/**
+ * Replace the account's price list (validated by the caller with priceListSchema). One statement
+ * (insert, or update on the owner's row) so two first saves at once cannot both insert.
+ */
 export async function putPriceList(em: EntityManager, user: User, list: PriceList): Promise<PriceListView> {
   const items = list.items.map((i) => ({ ...i })) as unknown as Record<string, unknown>[];
-  let row = await em.findOne(PriceListSchema, { owner: user.id });
-  if (row) {
-    row.items = items;
-    row.currency = list.currency;
-    row.updatedAt = new Date();
-  } else {
-    row = em.create(PriceListSchema, { owner: user, items, currency: list.currency, updatedAt: new Date() });
-  }
-  await em.flush();
+  const now = new Date();
+  const row = await em.upsert(
+    PriceListSchema,
+    { id: randomUUID(), createdAt: now, owner: user.id, items, currency: list.currency, updatedAt: now },
+    { onConflictFields: ["owner"], onConflictAction: "merge", onConflictMergeFields: ["items", "currency", "updatedAt"] },
+  );
   return { currency: "USD", items: list.items, isDefault: false, updatedAt: row.updatedAt.toISOString() };
 }
 

@@ -2,7 +2,8 @@ import { z } from "zod";
 
 /** Param and body shapes for the sharing and teaching routes. */
 export const planChild = (key: string) => z.object({ id: z.string().uuid(), [key]: z.string().uuid() });
-export const tokenParam = z.object({ token: z.string().min(1).max(200) });
+/** Link tokens are printable ASCII (ours are base64url); anything else is an unknown link, never a database error. */
+export const tokenParam = z.object({ token: z.string().min(1).max(200).regex(/^[\x21-\x7e]+$/) });
 export const createLinkBody = z.object({
   label: z.string().trim().max(80).optional(),
   /** Either an absolute expiry or a number of days from now; neither means no expiry. */
