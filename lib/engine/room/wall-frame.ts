@@ -1,5 +1,5 @@
 import type { Vec2 } from "../geometry/types";
-import type { SolvedRoom } from "./types";
+import type { SolvedRoom, SolvedWall } from "./types";
 
 /** A wall's own frame: origin at its start corner, `along` toward its end, `inward` into the room (unit vectors; lengths mm). */
 export interface WallFrame {
@@ -11,11 +11,21 @@ export interface WallFrame {
   lengthMm: number;
 }
 
+/**
+ * How thick walls are drawn, mm (our own drawing size: the plan does not measure wall thickness).
+ * Walls stand outside the floor polygon, so fixtures' backs sit on the inner face.
+ */
+export const DRAWN_WALL_THICKNESS_MM = 100;
+
+/** The frame of one solved wall (mm); the one wall frame every view and tool uses. */
+export function frameOfWall(w: SolvedWall): WallFrame {
+  return { wallId: w.id, origin: w.start, along: w.dir, inward: w.inward, lengthMm: w.solvedLengthMm ?? Math.hypot(w.end.x - w.start.x, w.end.y - w.start.y) };
+}
+
 /** The frame of a wall by id, or undefined when the room has no such wall. */
 export function wallFrame(room: SolvedRoom, wallId: string): WallFrame | undefined {
   const w = room.walls.find((x) => x.id === wallId);
-  if (!w) return undefined;
-  return { wallId: w.id, origin: w.start, along: w.dir, inward: w.inward, lengthMm: w.solvedLengthMm ?? Math.hypot(w.end.x - w.start.x, w.end.y - w.start.y) };
+  return w ? frameOfWall(w) : undefined;
 }
 
 /** World point (mm) of a spot `offsetAlongMm` from the wall's start and `distanceFromWallMm` out into the room. */
@@ -36,4 +46,13 @@ export function worldToWall(frame: WallFrame, p: Vec2): { offsetAlongMm: number;
 /** Heading of the wall, radians counter-clockwise from +x: the turn a fixture set against it takes. */
 export function wallHeading(frame: WallFrame): number {
   return Math.atan2(frame.along.y, frame.along.x);
+}
+
+/**
+ * Where a spot `offsetAlongMm` from the wall's start lies for a person standing in the room facing
+ * the wall: mm from the wall's left end as they see it. For a counter-clockwise room the start
+ * corner is on their right, so this is the solved length less the offset.
+ */
+export function fromViewersLeft(frame: WallFrame, offsetAlongMm: number): number {
+  return frame.lengthMm - offsetAlongMm;
 }
