@@ -2,6 +2,7 @@ import "server-only";
 import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutBucketCorsCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { env } from "./env";
+import { logError } from "./log";
 
 const g = globalThis as unknown as { __bwS3?: S3Client; __bwCors?: Promise<void> };
 
@@ -34,7 +35,7 @@ export function ensureDevCors(): Promise<void> {
     .then(() => undefined)
     .catch((err: unknown) => {
       g.__bwCors = undefined;
-      console.error("could not set CORS on the local storage fake", err);
+      logError("could not set CORS on the local storage fake", err);
     });
   return g.__bwCors;
 }

@@ -2,6 +2,7 @@ import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { env } from "../env";
 import { AppError } from "../errors";
+import { logError } from "../log";
 import type { Message } from "../mail/layout";
 
 const g = globalThis as unknown as { __bwMail?: Transporter };
@@ -27,7 +28,7 @@ export async function sendMail(to: string, m: Message): Promise<void> {
   try {
     await transport().sendMail({ from: env().MAIL_FROM, to, subject: m.subject, text: m.text, html: m.html });
   } catch (e) {
-    console.error("mail send failed", e);
+    logError("mail send failed", e);
     throw new AppError(502, "mail_failed", "The e-mail could not be sent just now. Nothing was changed; try again in a minute.");
   }
 }

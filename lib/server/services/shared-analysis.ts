@@ -3,6 +3,7 @@ import { evaluatePlan } from "@/lib/engine/checks/evaluate";
 import type { Finding } from "@/lib/engine/checks/types";
 import { derivePlan } from "@/lib/engine/derive";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
+import { logError } from "../log";
 
 export interface SharedAnalysis {
   findings: Finding[];
@@ -20,7 +21,7 @@ export function analyseForReading(doc: PlanDocument, preset: { name: string; num
     // The engine builds findings with a constructor; pages hand them to client components, which take plain objects only.
     return { findings: findings.map((f) => ({ ...f })), error: null };
   } catch (e) {
-    console.error("read-only analysis failed", e);
+    logError("read-only analysis failed", e);
     return { findings: [], error: "The checks could not run on this plan." };
   }
 }
