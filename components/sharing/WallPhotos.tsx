@@ -1,17 +1,19 @@
 "use client";
 
 import { useCallback, useEffect, useState, type ChangeEvent } from "react";
+import { DrawingFigure } from "@/components/drawings/DrawingFigure";
+import type { Drawing } from "@/lib/engine/drawings/types";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
-import { ElevationSketch } from "./ElevationSketch";
 import { PhotoScaler } from "./PhotoScaler";
 import { deletePhoto, listPhotos, setScale, uploadPhoto, type Photo } from "./photo-api";
 
 /**
  * Reference photos of the walls: upload (checked and cleaned by the server; location data removed),
- * scale by two points, and see the scaled photo behind the wall's elevation. Given `wallId` (the
- * editor's elevation view), it shows that wall's photos and leaves out its own wall choice.
+ * scale by two points, and see the scaled photo behind the wall's elevation (the engine's drawings,
+ * made on the server: `elevations`). Given `wallId` (the editor's elevation view), it shows that
+ * wall's photos and leaves out its own wall choice.
  */
-export function WallPhotos({ planId, document, canEdit, wallId: fixedWall, compact = false }: { planId: string; document: PlanDocument; canEdit: boolean; wallId?: string; compact?: boolean }) {
+export function WallPhotos({ planId, document, canEdit, wallId: fixedWall, compact = false, elevations = [] }: { planId: string; document: PlanDocument; canEdit: boolean; wallId?: string; compact?: boolean; elevations?: readonly Drawing[] }) {
   const [chosenWall, setWallId] = useState(document.room.walls[0]?.id ?? "");
   const wallId = fixedWall ?? chosenWall;
   const [photos, setPhotos] = useState<Photo[]>([]);
@@ -40,6 +42,7 @@ export function WallPhotos({ planId, document, canEdit, wallId: fixedWall, compa
 
   const mine = photos.filter((p) => p.wallId === wallId);
   const shown = mine.find((p) => p.mmPerPx && p.url);
+  const elevation = elevations.find((d) => d.wallId === wallId);
   return (
     <section aria-labelledby="photos-h" className="flex flex-col gap-3">
       {compact ? (
@@ -68,7 +71,13 @@ export function WallPhotos({ planId, document, canEdit, wallId: fixedWall, compa
       </div>
       {msg && <p role="alert" className="text-sm text-brick-700">{msg}</p>}
       {compact && canEdit && mine.length === 0 && <p className="text-xs text-walnut-500">No photos of this wall yet.</p>}
-      {shown && !compact && <ElevationSketch document={document} wallId={wallId} photo={{ url: shown.url!, widthMm: (shown.widthPx ?? 0) * shown.mmPerPx!, heightMm: (shown.heightPx ?? 0) * shown.mmPerPx! }} />}
+      {shown && !compact && elevation && (
+        <DrawingFigure
+          drawing={elevation}
+          caption={`${elevation.wallName ?? ""} with the scaled photo behind it (its left edge at the corner on your left, its bottom at the floor)`}
+          photo={{ url: shown.url!, widthMm: (shown.widthPx ?? 0) * shown.mmPerPx!, heightMm: (shown.heightPx ?? 0) * shown.mmPerPx! }}
+        />
+      )}
       <ul className="grid gap-4 md:grid-cols-2">
         {mine.map((p) => (
           <li key={p.id} className="rounded-lg border border-walnut-100 bg-white p-2">

@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { Finding } from "@/lib/engine/checks/types";
+import type { PlanDrawings } from "@/lib/engine/drawings/plan-drawings";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { StepStage } from "./StepStage";
 import { stepForKey, type Step } from "./steps";
@@ -13,13 +14,15 @@ interface Props {
   ownerName: string;
   steps: Step[];
   document: PlanDocument;
+  /** The plan view and wall elevations, made on the server by the engine (null when the room cannot be solved). */
+  drawings: PlanDrawings | null;
   presetName: string | null;
   /** The plan's findings (server-computed), so a step can show what its rule says about this plan. */
   findings: Finding[];
 }
 
 /** Full-screen presentation: one step at a time, arrow keys or buttons to move, F for full screen. */
-export function Presenter({ title, planName, ownerName, steps, document, presetName, findings }: Props) {
+export function Presenter({ title, planName, ownerName, steps, document, drawings, presetName, findings }: Props) {
   const [i, setI] = useState(0);
   const root = useRef<HTMLDivElement>(null);
   const count = steps.length;
@@ -60,7 +63,7 @@ export function Presenter({ title, planName, ownerName, steps, document, presetN
       {step ? (
         <div className="grid min-h-0 flex-1 grid-rows-[1fr_auto] md:grid-cols-[1fr_22rem] md:grid-rows-1">
           <div className="min-h-0" data-testid="step-stage" data-view={step.view}>
-            <StepStage document={document} step={step} />
+            <StepStage document={document} drawings={drawings} step={step} />
           </div>
           <aside className="flex flex-col gap-3 overflow-auto border-l border-walnut-100 bg-paper-deep p-4">
             <h1 className="text-xl font-semibold text-walnut-900" data-testid="step-title">{step.title}</h1>

@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { Presenter } from "@/components/teaching/Presenter";
 import type { Step } from "@/components/teaching/steps";
 import { requestEm } from "@/lib/server/db";
+import { planDrawingsOrNull } from "@/lib/engine/drawings/plan-drawings";
 import { AppError } from "@/lib/server/errors";
 import { currentUser } from "@/lib/server/session";
 import { analyseForReading } from "@/lib/server/services/shared-analysis";
@@ -26,5 +27,5 @@ export default async function PresentPage({ params, searchParams }: Props) {
     throw e;
   }
   const { findings } = analyseForReading(w.document, w.preset ? { name: w.preset.name, numbers: w.preset.numbers } : null);
-  return <Presenter title={w.title} planName={w.planName} ownerName={w.ownerName} steps={w.steps as Step[]} document={w.document} presetName={w.preset?.name ?? null} findings={findings} />;
+  return <Presenter title={w.title} planName={w.planName} ownerName={w.ownerName} steps={w.steps as Step[]} document={w.document} drawings={planDrawingsOrNull(w.document)} presetName={w.preset?.name ?? null} findings={findings} />;
 }

@@ -4,6 +4,8 @@ import { ReadOnlyFindings } from "@/components/sharing/ReadOnlyFindings";
 import { PartsView } from "@/components/parts/PartsView";
 import { CopyPlanButton } from "@/components/sharing/CopyPlanButton";
 import { SharedPlanView } from "@/components/sharing/SharedPlanView";
+import { planDrawingsOrNull } from "@/lib/engine/drawings/plan-drawings";
+import { FIXTURE_KINDS } from "@/lib/engine/fixtures/registry";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
 import { presetOfDocument } from "@/lib/server/services/plan-preset";
@@ -48,6 +50,8 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
       <SharedPlanView
         document={plan.document}
         preset={preset ? { name: preset.name, ownerName: preset.ownerName, numbers: preset.numbers as Record<string, number> } : null}
+        drawings={planDrawingsOrNull(plan.document)}
+        kindNames={Object.fromEntries(FIXTURE_KINDS.map((k) => [k.kind, k.title]))}
         checks={analysis.error ? <p className="text-sm text-brick-700">{analysis.error}</p> : <ReadOnlyFindings findings={analysis.findings} />}
         parts={<PartsView plan={plan.document} />}
       />
