@@ -4,15 +4,13 @@ import type { Editor } from "@/lib/client/editor";
 import { EditorProvider } from "@/lib/client/react/EditorContext";
 import { CameraRig } from "./CameraRig";
 import { DimensionLines } from "./DimensionLines";
-import { FixtureInstances } from "./fixtures/FixtureInstances";
 import { FrameCounter } from "./FrameCounter";
 import { Ghost, TapeLine } from "./GhostAndTape";
 import { PointerBridge } from "./PointerBridge";
-import { RoomLayer } from "./RoomLayer";
+import { PlanLayers } from "./PlanLayers";
 import { SelectionOutline } from "./SelectionOutline";
 import { TestHooks } from "./TestHooks";
 import { M } from "./units";
-import { ZonesLayer } from "./ZonesLayer";
 import { ZoneTooltip } from "./ZoneTooltip";
 
 /**
@@ -49,11 +47,7 @@ export default function EditorCanvas({ editor, label }: { editor: Editor; label:
           <hemisphereLight args={["#ffffff", "#b89c80", 0.35]} />
           <CameraRig />
           <group scale={M}>
-            <group name="pickables">
-              <RoomLayer />
-              <FixtureInstances />
-            </group>
-            <ZonesLayer />
+            <PlanLayers />
             <SelectionOutline />
             <Ghost />
             <TapeLine />

@@ -4,10 +4,9 @@ import { memo, useMemo, useRef } from "react";
 import { Shape, type Group } from "three";
 import type { Opening } from "@/lib/engine/plan/schema";
 import type { SolvedRoom, SolvedWall } from "@/lib/engine/room/types";
+import { DRAWN_WALL_THICKNESS_MM as WALL_THICKNESS_MM, frameOfWall, wallHeading, wallToWorld } from "@/lib/engine/room/wall-frame";
 import { useDerived, useDoc } from "@/lib/client/react/useEditorState";
 import { prismGeometry } from "./prism";
-
-const WALL_THICKNESS_MM = 100;
 
 /**
  * Hides the walls between the camera and the room (their inner face looks away from the camera) so
@@ -45,12 +44,12 @@ function Cutaway({ walls, children }: { walls: readonly SolvedWall[]; children: 
 }
 
 function WallMesh({ wall, heightMm }: { wall: SolvedWall; heightMm: number }) {
-  // Walls stand outside the floor polygon so fixtures' backs sit on the inner face.
-  const cx = (wall.start.x + wall.end.x) / 2 - (wall.inward.x * WALL_THICKNESS_MM) / 2;
-  const cy = (wall.start.y + wall.end.y) / 2 - (wall.inward.y * WALL_THICKNESS_MM) / 2;
+  // Walls stand outside the floor polygon so fixtures' backs sit on the inner face; drawn at their solved length.
+  const f = frameOfWall(wall);
+  const c = wallToWorld(f, f.lengthMm / 2, -WALL_THICKNESS_MM / 2);
   return (
-    <mesh position={[cx, cy, heightMm / 2]} rotation={[0, 0, Math.atan2(wall.dir.y, wall.dir.x)]} userData={{ pick: "wall", wallId: wall.id }}>
-      <boxGeometry args={[wall.lengthMm + WALL_THICKNESS_MM * 2, WALL_THICKNESS_MM, heightMm]} />
+    <mesh position={[c.x, c.y, heightMm / 2]} rotation={[0, 0, wallHeading(f)]} userData={{ pick: "wall", wallId: wall.id }}>
+      <boxGeometry args={[f.lengthMm + WALL_THICKNESS_MM * 2, WALL_THICKNESS_MM, heightMm]} />
       <meshStandardMaterial color="#efe7da" transparent opacity={0.5} depthWrite={false} />
     </mesh>
   );
@@ -60,11 +59,10 @@ const openingColour: Record<Opening["kind"], string> = { "entry-door": "#8a6a48"
 
 function OpeningMesh({ opening, wall }: { opening: Opening; wall: SolvedWall }) {
   const bottom = opening.kind === "window" ? opening.sillMm : 0;
-  const along = opening.offsetMm + opening.widthMm / 2;
-  const x = wall.start.x + wall.dir.x * along - (wall.inward.x * WALL_THICKNESS_MM) / 2;
-  const y = wall.start.y + wall.dir.y * along - (wall.inward.y * WALL_THICKNESS_MM) / 2;
+  const f = frameOfWall(wall);
+  const c = wallToWorld(f, opening.offsetMm + opening.widthMm / 2, -WALL_THICKNESS_MM / 2);
   return (
-    <mesh position={[x, y, bottom + opening.heightMm / 2]} rotation={[0, 0, Math.atan2(wall.dir.y, wall.dir.x)]} userData={{ pick: "wall", wallId: wall.id }}>
+    <mesh position={[c.x, c.y, bottom + opening.heightMm / 2]} rotation={[0, 0, wallHeading(f)]} userData={{ pick: "wall", wallId: wall.id }}>
       <boxGeometry args={[opening.widthMm, WALL_THICKNESS_MM * 1.2, opening.heightMm]} />
       <meshStandardMaterial color={openingColour[opening.kind]} transparent opacity={0.55} depthWrite={false} />
     </mesh>
