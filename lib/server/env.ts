@@ -22,10 +22,26 @@ const envSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
   S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true"),
-  /** Failed sign-ins allowed per account and per IP in the window below. */
-  AUTH_MAX_FAILURES: z.coerce.number().int().min(1).default(8),
-  AUTH_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).default(200),
-  AUTH_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  /**
+   * Sign-in limits (lib/server/rate-limit.ts): failed tries of one account from one address before
+   * delays start, failures of one address across all accounts before it is refused, the window they
+   * count in, and the first delay (it doubles with each further failure, up to the maximum).
+   */
+  AUTH_MAX_FAILURES: z.coerce.number().int().min(1).max(1000).default(8),
+  AUTH_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).max(100_000).default(200),
+  AUTH_WINDOW_MINUTES: z.coerce.number().int().min(1).max(1440).default(15),
+  AUTH_DELAY_BASE_SECONDS: z.coerce.number().int().min(1).max(3600).default(5),
+  AUTH_DELAY_MAX_SECONDS: z.coerce.number().int().min(1).max(86_400).default(900),
+  /**
+   * Whether X-Forwarded-For comes from our own proxies: unset or "false" trusts none of it (a client
+   * can write anything there); "true" trusts the one proxy in front; a number trusts that many hops.
+   */
+  TRUST_PROXY: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .regex(/^(|true|false|[0-9]{1,2})$/, 'Use "true", "false" or the number of proxies in front of the app.')
+    .optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;
