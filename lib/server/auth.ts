@@ -2,54 +2,86 @@ import "server-only";
 import type { AuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
-import { UserSchema, type AccountRole } from "@/entities/User";
+import type { AccountRole } from "@/entities/User";
+import { clientAddress } from "./client-address";
 import { requestEm } from "./db";
 import { env } from "./env";
-import { checkPassword } from "./passwords";
-import { attemptKeys, clearAccount, isLimited, recordFailure } from "./rate-limit";
+import { accountState, endSessions, isLive } from "./session-state";
+import { SESSION_MAX_AGE_S } from "./session-token";
+import { passwordSignIn } from "./sign-in";
 
-const credentials = z.object({ email: z.string().trim().toLowerCase().email(), password: z.string().min(1).max(200) });
+const credentials = z.object({ email: z.string().trim().toLowerCase().email().max(254), password: z.string().min(1).max(200) });
 
-function clientIp(headers: Record<string, unknown> | undefined): string {
-  const fwd = headers?.["x-forwarded-for"];
-  const first = typeof fwd === "string" ? fwd.split(",")[0]?.trim() : undefined;
-  return first || (typeof headers?.["x-real-ip"] === "string" ? (headers["x-real-ip"] as string) : "local");
+/**
+ * Error codes the sign-in step answers with (next-auth puts them in the answer's ?error=); the
+ * route in app/api/auth maps them to statuses. Never an internal message: it would reach the URL.
+ */
+export const SIGN_IN_CODES = { wait: "wait_", capped: "too_many_attempts", disabled: "account_disabled", unavailable: "unavailable" } as const;
+
+/** Thrown by the jwt callback when a cookie's session was ended; next-auth then clears the cookie. */
+const SESSION_ENDED = "session_ended";
+
+class SignInRefused extends Error {}
+
+function headerBag(headers: unknown): Headers {
+  const h = new Headers();
+  if (headers && typeof headers === "object") for (const [k, v] of Object.entries(headers as Record<string, unknown>)) if (typeof v === "string") h.set(k, v);
+  return h;
 }
 
-/** Sign-in by e-mail and password; JWT sessions carry the account id and role. */
+async function authorize(raw: unknown, headers: unknown) {
+  const parsed = credentials.safeParse(raw);
+  if (!parsed.success) return null;
+  const { email, password } = parsed.data;
+  try {
+    const em = await requestEm();
+    const r = await passwordSignIn(em, email, password, clientAddress(headerBag(headers)));
+    switch (r.kind) {
+      case "ok":
+        return { id: r.user.id, email: r.user.email, name: r.user.name, role: r.user.role, sessionVersion: r.user.sessionVersion };
+      case "wrong":
+        return null;
+      case "wait":
+        throw new SignInRefused(`${SIGN_IN_CODES.wait}${r.seconds}`);
+      case "address_capped":
+        throw new SignInRefused(SIGN_IN_CODES.capped);
+      case "disabled":
+        throw new SignInRefused(SIGN_IN_CODES.disabled);
+    }
+  } catch (e) {
+    if (e instanceof SignInRefused) throw e;
+    console.error("sign-in could not be checked:", e instanceof Error ? e.name : "unknown error");
+    throw new SignInRefused(SIGN_IN_CODES.unavailable);
+  }
+}
+
+/** Sign-in by e-mail and password; JWT sessions carry the account id, role and session version. */
 export function authOptions(): AuthOptions {
   return {
     secret: env().NEXTAUTH_SECRET,
-    session: { strategy: "jwt", maxAge: 30 * 24 * 3600 },
+    session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_S },
     pages: { signIn: "/signin" },
     providers: [
       CredentialsProvider({
         name: "E-mail and password",
         credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-        async authorize(raw, req) {
-          const parsed = credentials.safeParse(raw);
-          if (!parsed.success) return null;
-          const { email, password } = parsed.data;
-          const em = await requestEm();
-          const keys = attemptKeys(email, clientIp(req?.headers as Record<string, unknown> | undefined));
-          if (await isLimited(em, keys)) throw new Error("too_many_attempts");
-          const user = await em.findOne(UserSchema, { email }, { populate: ["passwordHash"] });
-          const ok = user ? await checkPassword(password, user.passwordHash) : false;
-          if (!user || !ok) {
-            await recordFailure(em, keys);
-            return null;
-          }
-          await clearAccount(em, email);
-          return { id: user.id, email: user.email, name: user.name, role: user.role };
-        },
+        authorize: (raw, req) => authorize(raw, req?.headers),
       }),
     ],
     callbacks: {
-      jwt({ token, user }) {
+      async jwt({ token, user }) {
         if (user) {
-          token.uid = user.id;
-          token.role = (user as { role?: AccountRole }).role ?? "member";
+          const u = user as { id: string; role?: AccountRole; sessionVersion?: number };
+          token.uid = u.id;
+          token.role = u.role ?? "member";
+          token.sv = u.sessionVersion;
+          return token;
         }
+        // Every later read of the cookie (the session endpoint) checks the account again.
+        const uid = typeof token.uid === "string" ? token.uid : null;
+        const state = uid ? await accountState(await requestEm(), uid) : null;
+        if (!uid || !state || !isLive({ uid, sv: typeof token.sv === "number" ? token.sv : undefined }, state)) throw new Error(SESSION_ENDED);
+        token.role = state.role;
         return token;
       },
       session({ session, token }) {
@@ -59,6 +91,29 @@ export function authOptions(): AuthOptions {
         }
         return session;
       },
+    },
+    events: {
+      /** Signing out ends every session of the account, not only this browser's cookie. */
+      async signOut({ token }) {
+        const uid = typeof token?.uid === "string" ? token.uid : null;
+        if (!uid) return;
+        const em = await requestEm();
+        const state = await accountState(em, uid, { fresh: true });
+        if (isLive({ uid, sv: typeof token.sv === "number" ? token.sv : undefined }, state)) await endSessions(em, uid);
+      },
+    },
+    logger: {
+      error(code, metadata) {
+        const m = metadata as { message?: unknown; error?: { message?: unknown } } | undefined;
+        const message = typeof m?.message === "string" ? m.message : typeof m?.error?.message === "string" ? m.error.message : "";
+        // An ended session is an expected answer, not a fault.
+        if (code === "JWT_SESSION_ERROR" && message === SESSION_ENDED) return;
+        console.error(`auth: ${code}${message ? `: ${message.slice(0, 200)}` : ""}`);
+      },
+      warn(code) {
+        console.warn(`auth: ${code}`);
+      },
+      debug() {},
     },
   };
 }

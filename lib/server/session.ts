@@ -1,16 +1,20 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { getServerSession } from "next-auth";
 import { UserSchema, type User } from "@/entities/User";
-import { authOptions } from "./auth";
 import { forbidden, unauthorized } from "./errors";
+import { isLive, liveOf } from "./session-state";
+import { readSessionClaims } from "./session-token";
 
-/** The signed-in account, read fresh from the database (its role is authoritative here, not the cookie's). */
+/**
+ * The signed-in account, read fresh from the database in one primary-key read (its role is
+ * authoritative here, not the cookie's). A cookie from before the account's last sign-out, password
+ * reset or change, or of a disabled account, is no session.
+ */
 export async function currentUser(em: EntityManager): Promise<User | null> {
-  const session = await getServerSession(authOptions());
-  const id = session?.user?.id;
-  if (!id) return null;
-  return em.findOne(UserSchema, { id });
+  const claims = await readSessionClaims();
+  if (!claims) return null;
+  const user = await em.findOne(UserSchema, { id: claims.uid });
+  return user && isLive(claims, liveOf(user)) ? user : null;
 }
 
 /** The signed-in account, or 401. */

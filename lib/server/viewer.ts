@@ -1,10 +1,19 @@
 import "server-only";
-import { getServerSession } from "next-auth";
-import { authOptions } from "./auth";
+import { requestEm } from "./db";
+import { accountState, isLive } from "./session-state";
+import { readSessionClaims } from "./session-token";
 
-/** The session's user for rendering (name, role), without a database round trip; null when signed out. */
+/**
+ * The session's user for rendering (name, role); null when signed out or when the session was
+ * ended (sign-out elsewhere, password reset or change, disabled). Name and e-mail come from the
+ * cookie; whether the session is live and the role come from the account (one cached read).
+ */
 export async function sessionUser(): Promise<{ id: string; name: string; email: string; role: string } | null> {
-  const s = await getServerSession(authOptions());
-  if (!s?.user?.id) return null;
-  return { id: s.user.id, name: s.user.name ?? s.user.email ?? "", email: s.user.email ?? "", role: s.user.role };
+  const claims = await readSessionClaims();
+  if (!claims) return null;
+  const state = await accountState(await requestEm(), claims.uid);
+  if (!state || !isLive(claims, state)) return null;
+  const email = typeof claims.raw.email === "string" ? claims.raw.email : "";
+  const name = typeof claims.raw.name === "string" && claims.raw.name ? claims.raw.name : email;
+  return { id: claims.uid, name, email, role: state.role };
 }
