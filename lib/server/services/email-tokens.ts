@@ -4,6 +4,7 @@ import { UserSchema, type User } from "@/entities/User";
 import { invalid, notFound, tooMany } from "../errors";
 import { resetMessage, verifyMessage } from "../mail/templates";
 import { hashPassword, passwordProblem } from "../passwords";
+import { endSessions } from "../session-state";
 import { appLink, sendMail } from "./mail";
 import { hashToken, newToken, tokenShape } from "./tokens";
 
@@ -47,7 +48,7 @@ export async function checkResetToken(em: EntityManager, token: string): Promise
   return { email: row.user.email };
 }
 
-/** Sets the new password and spends every open reset link of the account. */
+/** Sets the new password, spends every open reset link of the account and ends all its sessions. */
 export async function confirmReset(em: EntityManager, token: string, password: string): Promise<void> {
   const row = await usable(em, token, "reset");
   const problem = passwordProblem(password, row.user.email);
@@ -60,6 +61,7 @@ export async function confirmReset(em: EntityManager, token: string, password: s
   await em.nativeUpdate(EmailTokenSchema, { user: user.id, purpose: "reset", usedAt: null }, { usedAt: now });
   row.usedAt = now;
   await em.flush();
+  await endSessions(em, user.id);
 }
 
 /** Sends an address-confirmation link to the signed-in account (nothing when already confirmed). */

@@ -22,9 +22,11 @@ const current = async (w: World, id: string) => ok(await w.c.owner.client.get(`/
 
 export const planEntries: Entry[] = [
   { file: "auth/[...nextauth]/route.ts", method: "GET", call: () => ({ path: "/api/auth/csrf" }), expect: everyone(200) },
-  // A credentials post without the CSRF token is turned away by next-auth with a redirect, whoever sends it.
-  { file: "auth/[...nextauth]/route.ts", method: "POST", call: () => ({ path: "/api/auth/callback/credentials", body: {} }), expect: everyone(302) },
+  // The auth endpoints take forms only: a JSON post is refused before next-auth sees it, whoever sends it.
+  { file: "auth/[...nextauth]/route.ts", method: "POST", call: () => ({ path: "/api/auth/callback/credentials", body: {} }), expect: everyone(415) },
   { file: "v1/account/route.ts", method: "POST", call: () => ({ path: "/api/v1/account", body: { name: "Matrix", email: `m-${randomUUID().slice(0, 8)}@example.test`, password: "Cedar-and-elm-31" } }), expect: everyone(201), note: "sign-up is open to anyone" },
+  // An empty body is refused by the schema (422) once signed in; a wrong current password would count as a failed sign-in.
+  { file: "v1/account/password/route.ts", method: "PUT", call: () => ({ path: "/api/v1/account/password", body: {} }), expect: signedIn(422) },
   { file: "v1/admin/users/route.ts", method: "GET", call: () => ({ path: "/api/v1/admin/users" }), expect: { ...signedIn(403), admin: 200 } },
   { file: "v1/admin/users/[id]/route.ts", method: "PATCH", call: (w) => ({ path: `/api/v1/admin/users/${w.strangerId}`, body: { role: "member" } }), expect: { ...signedIn(403), admin: 200 } },
   { file: "v1/plans/route.ts", method: "GET", call: () => ({ path: "/api/v1/plans" }), expect: signedIn(200) },
