@@ -80,4 +80,28 @@ describe.skipIf(!hasServer)("rule presets: instructors make them, plans adopt th
     expect((await ines.del(`/api/v1/presets/${made.body.preset.id}`)).status).toBe(200);
     expect((await ines.get(`/api/v1/presets/${made.body.preset.id}`)).status).toBe(404);
   });
+
+  it("a plan's preset route shows only published presets or the caller's own: a draft id typed into settings answers 404", async () => {
+    const draft = (await ines.post("/api/v1/presets", { name: "Not yet public", numbers: strict })).body.preset.id as string;
+    const typed = await planWithRoles(c, "Typed preset id");
+    const plan = (await c.owner.client.get(`/api/v1/plans/${typed}`)).body.plan;
+    const document = { ...plan.document, settings: { ...plan.document.settings, presetId: draft } };
+    expect((await c.owner.client.put(`/api/v1/plans/${typed}`, { document, version: plan.version })).status).toBe(200);
+    for (const who of [c.owner, c.editor, c.viewer]) {
+      const r = await who.client.get(`/api/v1/plans/${typed}/preset`);
+      expect(r.status).toBe(404);
+      expect(JSON.stringify(r.body)).not.toContain("Not yet public");
+    }
+    // Nor through a share link.
+    const link = await c.owner.client.post(`/api/v1/plans/${typed}/links`, {});
+    const shared = await new Client().get(`/api/v1/shared/${link.body.token}`);
+    expect(shared.status).toBe(200);
+    expect(shared.body.preset).toBeNull();
+    expect(JSON.stringify(shared.body)).not.toContain("Not yet public");
+    // Once published it shows; unpublished again, it is hidden again (current access, not access at adoption).
+    expect((await ines.put(`/api/v1/presets/${draft}`, { name: "Not yet public", numbers: strict, published: true })).status).toBe(200);
+    expect((await c.viewer.client.get(`/api/v1/plans/${typed}/preset`)).body.preset.id).toBe(draft);
+    expect((await ines.put(`/api/v1/presets/${draft}`, { name: "Not yet public", numbers: strict, published: false })).status).toBe(200);
+    expect((await c.viewer.client.get(`/api/v1/plans/${typed}/preset`)).status).toBe(404);
+  });
 });

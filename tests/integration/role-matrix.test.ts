@@ -5,6 +5,7 @@ import { hasServer } from "./helpers/client";
 import { planEntries, type Entry } from "./helpers/role-entries-plans";
 import { sharingEntries } from "./helpers/role-entries-sharing";
 import { teachingEntries } from "./helpers/role-entries-teaching";
+import { buildRecheck, recheckEntries, type Recheck } from "./helpers/role-entries-access";
 import { buildWorld, PERSONAS, type World } from "./helpers/role-world";
 
 /**
@@ -49,9 +50,11 @@ describe("role matrix covers every route handler", () => {
 
 describe.skipIf(!hasServer)("role matrix against the running server", () => {
   let w: World;
+  let again: Recheck;
   beforeAll(async () => {
     w = await buildWorld();
-  }, 120_000);
+    again = await buildRecheck(w);
+  }, 180_000);
 
   const present = new Set(handlers());
   for (const e of ENTRIES) {
@@ -62,6 +65,19 @@ describe.skipIf(!hasServer)("role matrix against the running server", () => {
         const client = w.as[who];
         const r = await client.req(e.method, call.path, call.body ?? (e.method === "GET" || e.method === "DELETE" ? undefined : {}));
         got[who] = r.status;
+      }
+      expect(got).toEqual(e.expect);
+    }, 90_000);
+  }
+
+  // Access checked at every use: the same routes on records whose access changed after they were made.
+  for (const e of recheckEntries) {
+    it(`recheck: ${e.label}`, async () => {
+      const got: Record<string, number> = {};
+      for (const who of PERSONAS) {
+        const call = e.call(w, again, who);
+        const res = await w.as[who].req(e.method, call.path, call.body ?? (e.method === "GET" || e.method === "DELETE" ? undefined : {}));
+        got[who] = res.status;
       }
       expect(got).toEqual(e.expect);
     }, 90_000);

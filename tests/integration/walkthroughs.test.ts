@@ -1,5 +1,6 @@
 import { describe, it, expect, beforeAll } from "vitest";
-import { Client, demo, hasServer } from "./helpers/client";
+import { Client, DEMO, demo, hasServer } from "./helpers/client";
+import { inviteByName, uniqueName } from "./helpers/invite";
 import { addMember, cast, sampleDoc, type Cast } from "./helpers/sharing";
 
 const steps = [
@@ -80,5 +81,49 @@ describe.skipIf(!hasServer)("walk-throughs: built by instructors, presented read
     await addMember(c.owner.client, planId, ie, "editor");
     const made = await ines.post("/api/v1/walkthroughs", { planId, title: "On a student's plan", steps });
     expect(made.status).toBe(201);
+  });
+
+  it("follows the author's current role on the plan: removed, the walk-through stops serving and cannot be published", async () => {
+    const ie = { client: ines, email: DEMO.instructor };
+    const name = uniqueName("Lent plan");
+    const plan = (await c.owner.client.post("/api/v1/plans", { name, document: sampleDoc() })).body.plan.id as string;
+    await inviteByName(c.owner.client, plan, name, ie, "editor");
+    const made = await ines.post("/api/v1/walkthroughs", { planId: plan, title: "Borrowed lesson", steps, published: true });
+    const id = made.body.walkthrough.id as string;
+    const ownerId = made.body.walkthrough.ownerId as string;
+    const t = new URL((await ines.post(`/api/v1/walkthroughs/${id}/link`)).body.url).searchParams.get("t");
+    expect((await new Client().get(`/api/v1/walkthroughs/${id}`)).status).toBe(200);
+
+    // Downgraded to viewer: only the author opens it, read-only; nobody else, link or not; no changes.
+    const iid = (await ines.get("/api/auth/session")).body.user.id as string;
+    expect((await c.owner.client.patch(`/api/v1/plans/${plan}/members/${iid}`, { role: "viewer" })).status).toBe(200);
+    const asViewer = await ines.get(`/api/v1/walkthroughs/${id}`);
+    expect(asViewer.status).toBe(200);
+    expect(asViewer.body.walkthrough.canEdit).toBe(false);
+    expect((await new Client().get(`/api/v1/walkthroughs/${id}`)).status).toBe(404);
+    expect((await new Client().get(`/api/v1/walkthroughs/${id}?t=${t}`)).status).toBe(404);
+    expect((await ines.put(`/api/v1/walkthroughs/${id}`, { title: "Borrowed lesson", steps, published: true })).status).toBe(403);
+
+    // Removed: nobody opens it (the owner's later edits never reach it), it cannot be published or relinked, it leaves the class page.
+    expect((await c.owner.client.del(`/api/v1/plans/${plan}/members/${iid}`)).status).toBe(200);
+    const p = (await c.owner.client.get(`/api/v1/plans/${plan}`)).body.plan;
+    expect((await c.owner.client.put(`/api/v1/plans/${plan}`, { document: { ...p.document, room: { ...p.document.room, ceilingHeightMm: 2900 } }, version: p.version })).status).toBe(200);
+    expect((await ines.get(`/api/v1/walkthroughs/${id}`)).status).toBe(404);
+    expect((await new Client().get(`/api/v1/walkthroughs/${id}`)).status).toBe(404);
+    expect((await new Client().get(`/api/v1/walkthroughs/${id}?t=${t}`)).status).toBe(404);
+    expect((await ines.put(`/api/v1/walkthroughs/${id}`, { title: "Borrowed lesson", steps, published: true })).status).toBe(404);
+    expect((await ines.post(`/api/v1/walkthroughs/${id}/link`)).status).toBe(404);
+    const listed = await new Client().get(`/api/v1/walkthroughs?owner=${ownerId}`);
+    expect(listed.body.walkthroughs.map((w: { id: string }) => w.id)).not.toContain(id);
+    const own = (await ines.get("/api/v1/walkthroughs")).body.walkthroughs.find((w: { id: string }) => w.id === id);
+    expect(own.authorHasPlan).toBe(false);
+    const class_ = await new Client().raw(`/class/${ownerId}`);
+    expect(await class_.text()).not.toContain("Borrowed lesson");
+
+    // Given a role again it serves again; its author may always delete it.
+    await inviteByName(c.owner.client, plan, name, ie, "editor");
+    expect((await new Client().get(`/api/v1/walkthroughs/${id}`)).status).toBe(200);
+    expect((await c.owner.client.del(`/api/v1/plans/${plan}/members/${iid}`)).status).toBe(200);
+    expect((await ines.del(`/api/v1/walkthroughs/${id}`)).status).toBe(200);
   });
 });

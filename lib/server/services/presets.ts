@@ -47,6 +47,9 @@ const view = (p: RulePreset): PresetView => ({ id: p.id, name: p.name, descripti
 
 const teaches = (u: User | null) => u?.role === "instructor" || u?.role === "admin";
 
+/** Who may read a preset now: anyone when published; otherwise its author and admins. */
+export const presetVisible = (p: RulePreset, user: User | null): boolean => p.published || (!!user && (p.owner.id === user.id || user.role === "admin"));
+
 function requireTeacher(user: User): void {
   if (!teaches(user)) throw forbidden("Only an instructor can make rule presets.");
 }
@@ -63,7 +66,7 @@ export async function listPresets(em: EntityManager, user: User | null, opts: { 
 /** A preset I may see: published, mine, or any for an admin. Drafts of others answer 404. */
 export async function getPreset(em: EntityManager, user: User | null, id: string): Promise<PresetView> {
   const p = await em.findOne(RulePresetSchema, { id }, { populate: ["owner"] });
-  if (!p || (!p.published && p.owner.id !== user?.id && user?.role !== "admin")) throw notFound("That preset");
+  if (!p || !presetVisible(p, user)) throw notFound("That preset");
   return view(p);
 }
 
@@ -77,8 +80,7 @@ export async function createPreset(em: EntityManager, user: User, input: PresetI
 
 async function ownPreset(em: EntityManager, user: User, id: string): Promise<RulePreset> {
   const p = await em.findOne(RulePresetSchema, { id }, { populate: ["owner"] });
-  const visible = p && (p.published || p.owner.id === user.id || user.role === "admin");
-  if (!p || !visible) throw notFound("That preset");
+  if (!p || !presetVisible(p, user)) throw notFound("That preset");
   if (p.owner.id !== user.id && user.role !== "admin") throw forbidden("Only the instructor who made this preset can change it.");
   return p;
 }
