@@ -11,7 +11,12 @@ export interface Bin {
   load: number;
 }
 
+import { WorkBudget } from "../work-budget";
+
 const EPS = 1e-6;
+
+/** Steps (bins or pieces looked at) one board plan may spend by default: well under a second for the largest plan. */
+export const DEFAULT_BOARD_WORK = 2_000_000;
 
 /** Shortest stock length whose capacity holds `load`; -1 when none does. */
 function shortestFor(load: number, caps: number[]): number {
@@ -20,9 +25,11 @@ function shortestFor(load: number, caps: number[]): number {
   return best;
 }
 
-function firstFit(sizes: number[], order: number[], cap: number, bestFit: boolean): { items: number[]; load: number }[] {
+/** First or best fit; null when the budget runs out first. */
+function firstFit(sizes: number[], order: number[], cap: number, bestFit: boolean, work: WorkBudget): { items: number[]; load: number }[] | null {
   const bins: { items: number[]; load: number }[] = [];
   for (const i of order) {
+    if (!work.spend(bins.length + 1)) return null;
     let target = -1;
     for (let b = 0; b < bins.length; b++) {
       if (bins[b].load + sizes[i] > cap + EPS) continue;
@@ -50,15 +57,17 @@ function shrink(raw: { items: number[]; load: number }[], caps: number[]): Bin[]
 }
 
 /** Try to do without one board: move its pieces into the others' slack, allowing them to grow to a longer stock. */
-function improve(bins: Bin[], sizes: number[], lengths: number[], caps: number[]): Bin[] {
+function improve(bins: Bin[], sizes: number[], lengths: number[], caps: number[], work: WorkBudget): Bin[] {
   let cur = bins.map((b) => ({ ...b, items: [...b.items] }));
   let curCost = cost(cur, lengths);
   const maxCap = Math.max(...caps);
-  for (let round = 0; round < 200; round++) {
+  for (let round = 0; round < 200 && !work.exhausted; round++) {
     let improved = false;
     // 1. Empty a board, least loaded first.
     const byLoad = cur.map((b, i) => i).sort((a, b) => cur[a].load - cur[b].load);
     for (const victim of byLoad) {
+      // Copying every board and its pieces, then a best-fit scan per moved piece.
+      if (!work.spend(4 * cur.length + sizes.length + cur[victim].items.length * cur.length)) return cur;
       const next = cur.filter((_, i) => i !== victim).map((b) => ({ ...b, items: [...b.items] }));
       const moving = [...cur[victim].items].sort((a, b) => sizes[b] - sizes[a]);
       let ok = true;
@@ -88,6 +97,7 @@ function improve(bins: Bin[], sizes: number[], lengths: number[], caps: number[]
       outer: for (let a = 0; a < cur.length; a++)
         for (let b = 0; b < cur.length; b++) {
           if (a === b) continue;
+          if (!work.spend(1 + 4 * cur[a].items.length * (cur[b].items.length + 1))) return cur;
           for (let ia = 0; ia < cur[a].items.length; ia++) {
             const x = cur[a].items[ia];
             const candidates: (number | null)[] = [null, ...cur[b].items];
@@ -116,12 +126,28 @@ function improve(bins: Bin[], sizes: number[], lengths: number[], caps: number[]
   return cur;
 }
 
+/** Next fit: one open board at a time, so the work is one step a piece. */
+function nextFit(sizes: number[], order: number[], cap: number): { items: number[]; load: number }[] {
+  const bins: { items: number[]; load: number }[] = [];
+  for (const i of order) {
+    const last = bins[bins.length - 1];
+    if (last && last.load + sizes[i] <= cap + EPS) {
+      last.items.push(i);
+      last.load += sizes[i];
+    } else bins.push({ items: [i], load: sizes[i] });
+  }
+  return bins;
+}
+
 /**
  * Pack sizes into stock of the given capacities (lengths are what each costs): first-fit and
  * best-fit decreasing at each stock length, each board cut down to the shortest stock that holds
- * it, then local improvement. Every size must fit the largest capacity.
+ * it, then local improvement, within `maxWork` steps (counted, never timed: the same input gives
+ * the same boards everywhere). When the budget runs out before any fit is whole, next fit at the
+ * longest stock stands in. Every size must fit the largest capacity.
  */
-export function packLengths(sizes: number[], lengths: number[], caps: number[]): Bin[] {
+export function packLengths(sizes: number[], lengths: number[], caps: number[], maxWork: number = DEFAULT_BOARD_WORK): Bin[] {
+  const work = new WorkBudget(maxWork);
   const order = sizes.map((_, i) => i).sort((a, b) => sizes[b] - sizes[a] || a - b);
   const biggest = sizes.length ? sizes[order[0]] : 0;
   let best: Bin[] | null = null;
@@ -129,13 +155,19 @@ export function packLengths(sizes: number[], lengths: number[], caps: number[]):
   for (let s = 0; s < caps.length; s++) {
     if (caps[s] < biggest - EPS) continue;
     for (const bf of [false, true]) {
-      const bins = improve(shrink(firstFit(sizes, order, caps[s], bf), caps), sizes, lengths, caps);
+      const raw = firstFit(sizes, order, caps[s], bf, work);
+      if (!raw) break;
+      const bins = improve(shrink(raw, caps), sizes, lengths, caps, work);
       const c = cost(bins, lengths);
       if (c[0] < bestCost[0] - EPS || (Math.abs(c[0] - bestCost[0]) < EPS && c[1] < bestCost[1])) {
         best = bins;
         bestCost = c;
       }
     }
+  }
+  if (!best && sizes.length) {
+    const top = caps.indexOf(Math.max(...caps));
+    best = shrink(nextFit(sizes, order, caps[top]), caps);
   }
   return best ?? [];
 }

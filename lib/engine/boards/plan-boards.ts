@@ -1,6 +1,8 @@
 import type { Part } from "../fixtures/types";
 import type { Material } from "../plan/schema";
-import { packLengths } from "./cutting-stock";
+import { cuttable } from "../nesting/pieces";
+import { PLAN_LIMITS } from "../plan/limits";
+import { DEFAULT_BOARD_WORK, packLengths } from "./cutting-stock";
 import { DEFAULT_BOARD_LENGTHS_MM, DEFAULT_BOARD_WIDTHS_MM, DEFAULT_END_TRIM_MM } from "./stock";
 import type { BoardCut, BoardGroup, BoardLayout, BoardOptions, BoardPlan, BoardUnplaced } from "./types";
 
@@ -17,7 +19,8 @@ interface Piece {
 /**
  * Plan the solid-wood parts (stock "board") onto boards of standard lengths: each part goes to the
  * narrowest dressed width that holds it, then each material/thickness/width is packed end to end
- * with kerf and end trim. Lengths mm. Pure.
+ * with kerf and end trim, within a counted work budget (`maxWork`). At most PLAN_LIMITS.pieces
+ * pieces; parts past it or with no usable size are listed as unplaced. Lengths mm. Pure.
  */
 export function planBoards(parts: readonly Part[], materials: readonly Material[], opts: BoardOptions): BoardPlan {
   const kerf = opts.kerfMm;
@@ -33,8 +36,19 @@ export function planBoards(parts: readonly Part[], materials: readonly Material[
     else unplaced.set(p.id, { partId: p.id, name: p.name, qty: p.qty, reason });
   };
   const groups = new Map<string, { materialId: string; thicknessMm: number; widthMm: number; pieces: Piece[] }>();
+  const maxPieces = opts.maxPieces ?? PLAN_LIMITS.pieces;
+  let count = 0;
   for (const p of parts) {
     if (p.stock !== "board" || p.qty <= 0) continue;
+    const n = Math.ceil(p.qty);
+    if (!cuttable(p) || !Number.isFinite(n)) {
+      miss(p, "has no usable size: check the fixture's sizes");
+      continue;
+    }
+    if (count + n > maxPieces) {
+      miss(p, `past the plan's limit of ${maxPieces.toLocaleString("en-US")} pieces to lay out`);
+      continue;
+    }
     const width = widths.find((w) => w >= p.widthMm - EPS);
     if (width === undefined) {
       miss(p, `wider than the widest board (${widths[widths.length - 1].toFixed(1)} mm): glue up a panel`);
@@ -49,12 +63,13 @@ export function planBoards(parts: readonly Part[], materials: readonly Material[
     const key = `${p.materialId}|${thick}|${width}`;
     let g = groups.get(key);
     if (!g) groups.set(key, (g = { materialId: p.materialId, thicknessMm: thick, widthMm: width, pieces: [] }));
-    for (let i = 0; i < p.qty; i++) g.pieces.push({ key: `${p.id}#${i + 1}`, partId: p.id, name: p.name, lengthMm: p.lengthMm, widthMm: p.widthMm });
+    count += n;
+    for (let i = 0; i < n; i++) g.pieces.push({ key: `${p.id}#${i + 1}`, partId: p.id, name: p.name, lengthMm: p.lengthMm, widthMm: p.widthMm });
   }
   const out: BoardGroup[] = [];
   for (const g of groups.values()) {
     const sizes = g.pieces.map((p) => p.lengthMm + kerf);
-    const bins = packLengths(sizes, lengths, caps);
+    const bins = packLengths(sizes, lengths, caps, (Math.max(0, opts.maxWork ?? DEFAULT_BOARD_WORK) * g.pieces.length) / Math.max(1, count));
     const boards: BoardLayout[] = bins
       .map((b) => {
         const L = lengths[b.stock];

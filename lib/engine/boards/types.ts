@@ -57,4 +57,8 @@ export interface BoardOptions {
   lengthsMm?: number[];
   /** Dressed widths on sale, mm. Default 1x2 to 1x12. */
   widthsMm?: number[];
+  /** Work steps for the packing (bins and pieces looked at), shared by the groups by piece count; default DEFAULT_BOARD_WORK. */
+  maxWork?: number;
+  /** Most pieces laid out; default PLAN_LIMITS.pieces. */
+  maxPieces?: number;
 }

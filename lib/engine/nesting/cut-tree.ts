@@ -45,45 +45,59 @@ function cutsOn(panel: Rect, items: Rect[], axis: "x" | "y", kerf: number): numb
 }
 
 /**
- * Split a panel recursively with edge-to-edge cuts until each piece stands alone. Rips (cuts
- * along the sheet's length) are tried first, then each strip is crosscut, alternating by level.
- * Throws when the pieces cannot be separated by guillotine cuts.
+ * Split a panel with edge-to-edge cuts until each piece stands alone. Rips (cuts along the sheet's
+ * length) are tried first, then each strip is crosscut, alternating by level. Works from an explicit
+ * stack, so a sheet of many small pieces cannot overflow the call stack; each step either files a
+ * leaf or cuts a panel into strictly smaller ones. Throws when the pieces cannot be separated by
+ * guillotine cuts.
  */
 export function buildCutTree(panel: Rect, items: Rect[], kerf: number): CutTree {
   const tree: CutTree = { cuts: [], leaves: [] };
-  splitPanel(panel, items, kerf, 1, "y", tree);
+  const stack: Task[] = [{ panel, items, level: 1, prefer: "y" }];
+  // Tasks run in the order the recursive split visited them (first strip first): push in reverse.
+  for (let task = stack.pop(); task; task = stack.pop()) {
+    const subs = splitPanel(task, kerf, tree);
+    for (let i = subs.length - 1; i >= 0; i--) stack.push(subs[i]);
+  }
   return tree;
 }
 
-function splitPanel(panel: Rect, items: Rect[], kerf: number, level: number, prefer: "x" | "y", tree: CutTree): void {
-  if (panel.w <= EPS || panel.h <= EPS) return;
+interface Task {
+  panel: Rect;
+  items: Rect[];
+  level: number;
+  prefer: "x" | "y";
+}
+
+function splitPanel({ panel, items, level, prefer }: Task, kerf: number, tree: CutTree): Task[] {
+  if (panel.w <= EPS || panel.h <= EPS) return [];
   if (items.length === 0) {
     tree.leaves.push(panel);
-    return;
+    return [];
   }
   for (const axis of prefer === "y" ? (["y", "x"] as const) : (["x", "y"] as const)) {
     const at = cutsOn(panel, items, axis, kerf);
     if (at.length === 0) continue;
     let from = lo(panel, axis);
     const end = hi(panel, axis);
-    const bounds = [...at.map((c) => [c, c + kerf] as const)];
-    for (const c of at) {
-      tree.cuts.push({ level, axis, at: c, panel });
-    }
+    for (const c of at) tree.cuts.push({ level, axis, at: c, panel });
     const pieces: [number, number][] = [];
-    for (const [c0, c1] of bounds) {
-      pieces.push([from, Math.max(from, c0)]);
-      from = Math.min(end, c1);
+    for (const c of at) {
+      pieces.push([from, Math.max(from, c)]);
+      from = Math.min(end, c + kerf);
     }
     pieces.push([from, end]);
+    const subs: Task[] = [];
     for (const [a, b] of pieces) {
       if (b - a <= EPS) continue;
       const sub: Rect = axis === "y" ? { x: panel.x, y: a, w: panel.w, h: b - a } : { x: a, y: panel.y, w: b - a, h: panel.h };
       const inside = items.filter((r) => lo(r, axis) >= a - EPS && hi(r, axis) <= b + EPS);
-      splitPanel(sub, inside, kerf, level + 1, axis === "y" ? "x" : "y", tree);
+      // A cut that leaves every piece in a panel as large as the one it split makes no progress.
+      if (inside.length === items.length && b - a >= end - lo(panel, axis) - EPS) throw new Error("pieces cannot be separated by guillotine cuts (no progress)");
+      subs.push({ panel: sub, items: inside, level: level + 1, prefer: axis === "y" ? "x" : "y" });
     }
-    return;
+    return subs;
   }
-  if (items.length === 1) return; // the panel is the piece
+  if (items.length === 1) return []; // the panel is the piece
   throw new Error(`pieces cannot be separated by guillotine cuts (${items.length} in a ${panel.w} x ${panel.h} panel)`);
 }

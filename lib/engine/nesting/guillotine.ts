@@ -51,6 +51,10 @@ export interface PackOutcome {
 
 const EPS = 1e-6;
 
+/** Steps charged to a packing pass: one per free rectangle tested. Returning false aborts the pass. */
+export type Charge = (steps: number) => boolean;
+const FREE: Charge = () => true;
+
 function score(rule: ScoreRule, f: Rect, w: number, h: number): number {
   switch (rule) {
     case "area":
@@ -149,8 +153,11 @@ function bestRect(sheet: PackedSheet, item: PackItem, rule: ScoreRule, into: Bes
   return found;
 }
 
-/** Items in the given order, each into the best free rect of any open sheet; a new sheet when none fits. */
-export function packOrdered(items: PackItem[], stocks: PackStock[], kerf: number, rule: ScoreRule, split: SplitRule): PackOutcome {
+/**
+ * Items in the given order, each into the best free rect of the open sheets (the last `window` of
+ * them; all by default); a new sheet when none fits. Null when `charge` aborts the pass.
+ */
+export function packOrdered(items: PackItem[], stocks: PackStock[], kerf: number, rule: ScoreRule, split: SplitRule, charge: Charge = FREE, window = Infinity): PackOutcome | null {
   const minSide = items.reduce((m, it) => Math.min(m, it.len, it.wid), Infinity);
   const used = stocks.map(() => 0);
   const sheets: PackedSheet[] = [];
@@ -159,7 +166,9 @@ export function packOrdered(items: PackItem[], stocks: PackStock[], kerf: number
   for (const item of items) {
     let target: PackedSheet | null = null;
     best.s = Infinity;
-    for (const sh of sheets) {
+    for (let k = Math.max(0, sheets.length - window); k < sheets.length; k++) {
+      const sh = sheets[k];
+      if (!charge(sh.free.length + 1)) return null;
       const prev = best.s;
       if (bestRect(sh, item, rule, best) && best.s < prev) target = sh;
     }
@@ -180,9 +189,10 @@ export function packOrdered(items: PackItem[], stocks: PackStock[], kerf: number
 
 /**
  * One sheet at a time: repeatedly place the (piece, free rect) pair that fits best, until nothing
- * fits, then open the next sheet. Identical pieces are grouped so the scan stays cheap.
+ * fits, then open the next sheet. Identical pieces are grouped so the scan stays cheap. Null when
+ * `charge` aborts the pass.
  */
-export function packGlobal(items: PackItem[], stocks: PackStock[], kerf: number, rule: ScoreRule, split: SplitRule): PackOutcome {
+export function packGlobal(items: PackItem[], stocks: PackStock[], kerf: number, rule: ScoreRule, split: SplitRule, charge: Charge = FREE): PackOutcome | null {
   const minSide = items.reduce((m, it) => Math.min(m, it.len, it.wid), Infinity);
   const groups: { item: PackItem; ids: number[] }[] = [];
   const byKey = new Map<string, number>();
@@ -201,6 +211,7 @@ export function packGlobal(items: PackItem[], stocks: PackStock[], kerf: number,
   const leftover: number[] = [];
   const best: Best = { fi: -1, rotated: false, s: Infinity };
   while (remaining > 0) {
+    if (!charge(groups.length)) return null;
     const sheet = openSheet(stocks, used, (s) => groups.some((g) => g.ids.length > 0 && fitsStock(g.item, s)));
     if (!sheet) break;
     sheets.push(sheet);
@@ -212,6 +223,7 @@ export function packGlobal(items: PackItem[], stocks: PackStock[], kerf: number,
       for (let gi = 0; gi < groups.length; gi++) {
         const g = groups[gi];
         if (g.ids.length === 0) continue;
+        if (!charge(sheet.free.length + 1)) return null;
         const prev = best.s;
         if (bestRect(sheet, g.item, rule, best) && best.s < prev) {
           bestGroup = gi;

@@ -6,38 +6,43 @@ import type { PackItem, PackOutcome, PackStock, PackedSheet } from "./guillotine
 import { DEFAULT_REUSABLE_MIN_LENGTH_MM, DEFAULT_REUSABLE_MIN_WIDTH_MM, DEFAULT_TRIM_MM, sheetGroups } from "./pieces";
 import type { SheetGroup } from "./pieces";
 import { searchLayouts } from "./search";
+import { WorkBudget } from "../work-budget";
 import type { Cut, MaterialNest, NestOptions, NestResult, Offcut, Placement, SheetLayout, SheetStock, UnplacedPart } from "./types";
 
-const DEFAULT_BUDGET_MS = 600;
+/** Steps (free rectangles tested) the whole nest may spend by default: a few hundred layouts of a large shop's parts, well under a second. */
+export const DEFAULT_NEST_WORK = 20_000_000;
 const EPS = 1e-6;
 
 /**
  * Nest the sheet-good parts (stock "sheet") onto sheets of their own material and thickness, with
  * guillotine cuts, kerf and edge trim; grained parts keep their grain along the sheet's length.
- * Lengths mm, areas mm2, times ms. Pure: inputs are not changed.
+ * Lengths mm, areas mm2. The search is bounded by a work budget (`maxWork` steps) and an attempt
+ * cap, never by the clock, so the same input gives the same layout everywhere (`timeBudgetMs` is
+ * accepted and ignored). Pure: inputs are not changed.
  */
 export function nestSheets(parts: readonly Part[], materials: readonly Material[], opts: NestOptions): NestResult {
   const t0 = performance.now();
   const groups = sheetGroups(parts, materials);
   const total = groups.reduce((s, g) => s + g.pieces.length, 0);
-  const budget = opts.timeBudgetMs ?? DEFAULT_BUDGET_MS;
+  const budget = Math.max(0, opts.maxWork ?? DEFAULT_NEST_WORK);
   const out: MaterialNest[] = new Array(groups.length);
   let stopped = false;
-  let spent = 0;
+  let spentAll = 0;
+  let left = 0;
   // Small materials first: they finish their fixed heuristics quickly and leave the rest of the budget to the big ones.
-  const order = groups.map((_, i) => i).sort((a, b) => groups[a].pieces.length - groups[b].pieces.length);
+  const order = groups.map((_, i) => i).sort((a, b) => groups[a].pieces.length - groups[b].pieces.length || a - b);
   for (const gi of order) {
     const g = groups[gi];
-    // Share the budget by piece count; unspent time rolls over to later materials.
+    // Share the budget by piece count; unspent work rolls over to later materials.
     const share = total > 0 ? (budget * g.pieces.length) / total : budget;
-    const deadline = Math.min(t0 + budget, performance.now() + share + Math.max(0, spent));
-    const before = performance.now();
-    const r = nestGroup(g, opts, deadline, (f, attempts, best, lb) => {
+    const work = new WorkBudget(share + left);
+    const r = nestGroup(g, opts, work, (attempts, best, lb) => {
       if (!opts.onProgress) return true;
-      const fraction = Math.min(1, (performance.now() - t0) / budget);
+      const fraction = budget > 0 ? Math.min(1, (spentAll + work.spent) / budget) : 1;
       return opts.onProgress({ fraction, materialId: g.materialId, bestSheets: best, lowerBound: lb, attempts }) !== false;
     });
-    spent = share - (performance.now() - before);
+    left = Math.max(0, work.limit - work.spent);
+    spentAll += work.spent;
     out[gi] = r.nest;
     if (r.stopped) {
       stopped = true;
@@ -45,7 +50,7 @@ export function nestSheets(parts: readonly Part[], materials: readonly Material[
       opts = { ...opts, maxAttempts: 1, onProgress: undefined };
     }
   }
-  return { materials: out, unplaced: out.flatMap((m) => m.unplaced), elapsedMs: performance.now() - t0, stopped };
+  return { materials: out, unplaced: out.flatMap((m) => m.unplaced), elapsedMs: performance.now() - t0, stopped, work: spentAll };
 }
 
 /**
@@ -95,8 +100,8 @@ function stocksFor(g: SheetGroup, opts: NestOptions): SheetStock[] {
 function nestGroup(
   g: SheetGroup,
   opts: NestOptions,
-  deadline: number,
-  tick: (f: number, attempts: number, best: number, lb: number) => boolean,
+  work: WorkBudget,
+  tick: (attempts: number, best: number, lb: number) => boolean,
 ): { nest: MaterialNest; stopped: boolean } {
   const kerf = opts.kerfMm;
   const stocks = stocksFor(g, opts);
@@ -142,18 +147,18 @@ function nestGroup(
   let attempts = 0;
   if (items.length > 0) {
     const res = searchLayouts(items, pack, kerf, newStock, {
-      deadline,
+      work,
       maxAttempts: opts.maxAttempts ?? Infinity,
       lowerBound,
       seed: opts.seed ?? 1,
-      tick: (n, best) => tick(0, n, best, lowerBound),
+      tick: (n, best) => tick(n, best, lowerBound),
     });
     outcome = res.outcome;
     strategy = res.strategy;
     attempts = res.attempts;
     stopped = res.stopped;
   }
-  const sheets = outcome.sheets.map((s, i) => layoutSheet(s, i + 1, stocks[s.stock], g, kerf, opts));
+  const sheets = outcome.sheets.map((s, i) => layoutSheet(s, i + 1, stocks[s.stock], g, kerf, opts, notes));
   const partAreaMm2 = sheets.reduce((s, l) => s + l.partAreaMm2, 0);
   const stockAreaMm2 = sheets.reduce((s, l) => s + l.lengthMm * l.widthMm, 0);
   return {
@@ -172,15 +177,16 @@ function nestGroup(
       stockAreaMm2,
       yieldPct: stockAreaMm2 > 0 ? (100 * partAreaMm2) / stockAreaMm2 : 0,
       wasteMm2: stockAreaMm2 - partAreaMm2,
-      unplaced: [...unplacedCount.values()],
+      unplaced: [...g.refused, ...unplacedCount.values()],
       attempts,
+      work: work.spent,
       notes,
       strategy,
     },
   };
 }
 
-function layoutSheet(s: PackedSheet, index: number, stock: SheetStock, g: SheetGroup, kerf: number, opts: NestOptions): SheetLayout {
+function layoutSheet(s: PackedSheet, index: number, stock: SheetStock, g: SheetGroup, kerf: number, opts: NestOptions, notes: string[]): SheetLayout {
   const tx = stock.trimLengthMm;
   const ty = stock.trimWidthMm;
   const placements: Placement[] = s.items.map((it) => {
@@ -188,11 +194,17 @@ function layoutSheet(s: PackedSheet, index: number, stock: SheetStock, g: SheetG
     return { pieceKey: p.key, partId: p.partId, name: p.name, xMm: it.x + tx, yMm: it.y + ty, lenMm: it.w, widMm: it.h, rotated: it.rotated, grain: p.grain };
   });
   const usable = { x: tx, y: ty, w: stock.lengthMm - 2 * tx, h: stock.widthMm - 2 * ty };
-  const tree = buildCutTree(
-    usable,
-    placements.map((p) => ({ x: p.xMm, y: p.yMm, w: p.lenMm, h: p.widMm })),
-    kerf,
-  );
+  let tree: ReturnType<typeof buildCutTree> = { cuts: [], leaves: [] };
+  try {
+    tree = buildCutTree(
+      usable,
+      placements.map((p) => ({ x: p.xMm, y: p.yMm, w: p.lenMm, h: p.widMm })),
+      kerf,
+    );
+  } catch {
+    // The packer only makes guillotine layouts; if float noise defeats the cut order, say so rather than fail the nest.
+    notes.push(`Sheet ${index}: the cut order could not be worked out; cut it from the map.`);
+  }
   // Saw order: level by level (the sheet's rips, then each strip's crosscuts...), rips before crosscuts, near edge first.
   const ordered = [...tree.cuts].sort((a, b) => a.level - b.level || (a.axis === b.axis ? 0 : a.axis === "y" ? -1 : 1) || a.panel.y - b.panel.y || a.panel.x - b.panel.x || a.at - b.at);
   const cuts: Cut[] = ordered.map((c, i) => ({

@@ -1,6 +1,7 @@
 import type { Part } from "../fixtures/types";
 import type { Material } from "../plan/schema";
-import type { NestPiece } from "./types";
+import { PLAN_LIMITS } from "../plan/limits";
+import type { NestPiece, UnplacedPart } from "./types";
 
 /** 48 x 96 in sheet, mm (TRADE.md: common practice). */
 export const DEFAULT_SHEET_LENGTH_MM = 2438.4;
@@ -20,6 +21,8 @@ export interface SheetGroup {
   sheetLengthMm: number;
   sheetWidthMm: number;
   pieces: NestPiece[];
+  /** Parts left out: no usable size, or past the plan's piece limit. */
+  refused: UnplacedPart[];
 }
 
 /**
@@ -32,9 +35,16 @@ export function layersOf(partThicknessMm: number, sheetThicknessMm: number | und
   return Math.max(1, Math.ceil(partThicknessMm / sheetThicknessMm - 0.15));
 }
 
-/** Group sheet-good parts by material (at the sheet's own thickness when known) and expand quantities and layers into pieces. Sizes in mm. */
-export function sheetGroups(parts: readonly Part[], materials: readonly Material[]): SheetGroup[] {
+/** A part with a size the saw can cut: finite and positive on every side. */
+export const cuttable = (p: Pick<Part, "lengthMm" | "widthMm" | "thicknessMm">) => p.lengthMm > 0 && p.widthMm > 0 && p.thicknessMm > 0 && Number.isFinite(p.lengthMm * p.widthMm * p.thicknessMm);
+
+/**
+ * Group sheet-good parts by material (at the sheet's own thickness when known) and expand quantities and layers into pieces. Sizes in mm.
+ * At most `maxPieces` pieces in all (PLAN_LIMITS.pieces); parts past it, or with no usable size, are listed as refused.
+ */
+export function sheetGroups(parts: readonly Part[], materials: readonly Material[], maxPieces: number = PLAN_LIMITS.pieces): SheetGroup[] {
   const groups = new Map<string, SheetGroup>();
+  let count = 0;
   for (const p of parts) {
     if (p.stock !== "sheet" || p.qty <= 0) continue;
     const m = materials.find((x) => x.id === p.materialId);
@@ -54,10 +64,21 @@ export function sheetGroups(parts: readonly Part[], materials: readonly Material
         sheetLengthMm: Math.max(a, b),
         sheetWidthMm: Math.min(a, b),
         pieces: [],
+        refused: [],
       };
       groups.set(key, g);
     }
-    for (let i = 0; i < p.qty * layers; i++) {
+    const n = Math.ceil(p.qty) * layers;
+    if (!cuttable(p) || !Number.isFinite(n)) {
+      g.refused.push({ partId: p.id, name: p.name, qty: p.qty, reason: "has no usable size: check the fixture's sizes" });
+      continue;
+    }
+    if (count + n > maxPieces) {
+      g.refused.push({ partId: p.id, name: p.name, qty: p.qty, reason: `past the plan's limit of ${maxPieces.toLocaleString("en-US")} pieces to lay out` });
+      continue;
+    }
+    count += n;
+    for (let i = 0; i < n; i++) {
       g.pieces.push({ key: `${p.id}#${i + 1}`, partId: p.id, name: p.name, lengthMm: p.lengthMm, widthMm: p.widthMm, grain: p.grain });
     }
   }

@@ -1,5 +1,6 @@
 import { packGlobal, packOrdered } from "./guillotine";
-import type { PackItem, PackOutcome, PackStock, ScoreRule, SplitRule } from "./guillotine";
+import type { Charge, PackItem, PackOutcome, PackStock, ScoreRule, SplitRule } from "./guillotine";
+import type { WorkBudget } from "../work-budget";
 import { seededRandom } from "../geometry/seeded-random";
 
 /** A packing heuristic: how pieces are ordered, where each goes, and how leftover space is split. */
@@ -59,12 +60,12 @@ export function randomStrategy(rand: () => number): Strategy {
   return { name: `${mode}/${order}/${rule}/${split}/noisy`, mode, order, rule, split, noise };
 }
 
-/** Run one strategy. */
-export function runStrategy(st: Strategy, items: PackItem[], stocks: PackStock[], kerf: number, rand: () => number): PackOutcome {
+/** Run one strategy; null when `charge` aborts it. */
+export function runStrategy(st: Strategy, items: PackItem[], stocks: PackStock[], kerf: number, rand: () => number, charge?: Charge): PackOutcome | null {
   const keyed = items.map((it) => ({ it, k: keyOf(st.order, it) * (st.noise > 0 ? 1 + st.noise * rand() : 1) }));
   keyed.sort((a, b) => b.k - a.k || a.it.id - b.it.id);
   const ordered = keyed.map((x) => x.it);
-  return st.mode === "global" ? packGlobal(ordered, stocks, kerf, st.rule, st.split) : packOrdered(ordered, stocks, kerf, st.rule, st.split);
+  return st.mode === "global" ? packGlobal(ordered, stocks, kerf, st.rule, st.split, charge) : packOrdered(ordered, stocks, kerf, st.rule, st.split, charge);
 }
 
 /** Lexicographic quality: new sheets, then stock area used, then how unevenly sheets are filled (a fuller set and one big leftover beats scattered ones). */
@@ -90,9 +91,6 @@ export function better(a: readonly number[], b: readonly number[]): boolean {
   return false;
 }
 
-/** The one-sheet-at-a-time heuristics (the first fixed ones) always run: they are usually the best. */
-const MIN_ATTEMPTS = 18;
-
 export interface SearchResult {
   outcome: PackOutcome;
   strategy: string;
@@ -101,7 +99,8 @@ export interface SearchResult {
 }
 
 export interface SearchLimits {
-  deadline: number;
+  /** Steps the search may spend (free rectangles tested); shared with the caller. */
+  work: WorkBudget;
   maxAttempts: number;
   lowerBound: number;
   seed: number;
@@ -109,9 +108,17 @@ export interface SearchLimits {
   tick: (attempts: number, bestSheets: number) => boolean;
 }
 
+/** The fallback when the budget runs out before any layout is whole: largest first, into the newest sheet only (next fit), so its work grows with the piece count alone. */
+function fallback(items: PackItem[], stocks: PackStock[], kerf: number): PackOutcome {
+  const sorted = [...items].sort((a, b) => b.len * b.wid - a.len * a.wid || a.id - b.id);
+  return packOrdered(sorted, stocks, kerf, "area", "shorter-leftover", undefined, 1) as PackOutcome;
+}
+
 /**
  * Try the fixed heuristics, then randomised ones, keeping the best layout, until the new-sheet
- * count reaches the lower bound (after the fixed set), the deadline passes or the cap is hit.
+ * count reaches the lower bound (after the fixed set), the attempt cap is hit or the work budget is
+ * spent. An attempt the budget cuts short is dropped; if none finished, a next-fit layout stands in.
+ * The same inputs, seed and budget give the same layout on every machine.
  */
 export function searchLayouts(items: PackItem[], stocks: PackStock[], kerf: number, newStock: number, lim: SearchLimits): SearchResult {
   const rand = seededRandom(lim.seed);
@@ -121,10 +128,11 @@ export function searchLayouts(items: PackItem[], stocks: PackStock[], kerf: numb
   let bestName = "";
   let attempts = 0;
   let stopped = false;
-  const now = () => performance.now();
-  for (let i = 0; attempts < lim.maxAttempts; i++) {
+  const charge: Charge = (n) => lim.work.spend(n);
+  for (let i = 0; attempts < lim.maxAttempts && !lim.work.exhausted; i++) {
     const st = i < fixed.length ? fixed[i] : randomStrategy(rand);
-    const out = runStrategy(st, items, stocks, kerf, rand);
+    const out = runStrategy(st, items, stocks, kerf, rand, charge);
+    if (!out) break;
     attempts++;
     const key = outcomeKey(out, stocks, newStock);
     if (!best || better(key, bestKey)) {
@@ -136,10 +144,13 @@ export function searchLayouts(items: PackItem[], stocks: PackStock[], kerf: numb
       stopped = true;
       break;
     }
-    // Always finish at least the first fixed heuristics; after that stop when time is up, or
-    // when the bound is reached and the fixed set is done.
-    if (attempts >= MIN_ATTEMPTS && now() > lim.deadline) break;
+    // Stop when the bound is reached and the fixed set is done.
     if (i >= fixed.length - 1 && bestKey[0] === 0 && bestKey[1] <= lim.lowerBound) break;
   }
-  return { outcome: best as PackOutcome, strategy: bestName, attempts, stopped };
+  if (!best) {
+    best = fallback(items, stocks, kerf);
+    bestName = "next-fit (work budget spent)";
+    attempts++;
+  }
+  return { outcome: best, strategy: bestName, attempts, stopped };
 }

@@ -125,6 +125,8 @@ export interface MaterialNest {
   unplaced: UnplacedPart[];
   /** Layouts tried. */
   attempts: number;
+  /** Work steps spent on this material (free rectangles tested). */
+  work: number;
   /** Things the user should know, in words (edge trim dropped for a full-length part...). */
   notes: string[];
   /** Name of the heuristic that won. */
@@ -132,7 +134,7 @@ export interface MaterialNest {
 }
 
 export interface NestProgress {
-  /** Fraction of the time budget or attempt budget spent, 0..1. */
+  /** Fraction of the work budget spent, 0..1. */
   fraction: number;
   materialId: string;
   bestSheets: number;
@@ -151,9 +153,11 @@ export interface NestOptions {
   reusableMinWidthMm?: number;
   /** ... and at least this long on their long side, mm. */
   reusableMinLengthMm?: number;
-  /** Wall-clock budget for the search over all materials, ms. */
+  /** Accepted from older callers and ignored: the work budget and attempt cap decide, never the clock. */
   timeBudgetMs?: number;
-  /** Cap on layouts tried per material (makes runs repeatable regardless of machine speed). */
+  /** Work steps (free rectangles tested) for the search over all materials; default DEFAULT_NEST_WORK. */
+  maxWork?: number;
+  /** Cap on layouts tried per material. */
   maxAttempts?: number;
   /** Seed for the randomised orderings. */
   seed?: number;
@@ -165,6 +169,8 @@ export interface NestResult {
   materials: MaterialNest[];
   unplaced: UnplacedPart[];
   elapsedMs: number;
+  /** Work steps spent over all materials (at most `maxWork` plus one next-fit layout per material). */
+  work: number;
   /** True when onProgress stopped the search early. */
   stopped: boolean;
 }
