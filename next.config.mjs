@@ -10,7 +10,6 @@ const PERMISSIONS_POLICY = [
   "usb=()",
   "serial=()",
   "hid=()",
-  "bluetooth=()",
   "midi=()",
   "magnetometer=()",
   "gyroscope=()",

@@ -14,6 +14,15 @@ export interface LoggedError {
   stack?: string;
 }
 
+/** Keys whose values never reach the log, at any of the first three levels of a logged object. */
+const SECRET_KEYS = ["password", "passwordHash", "password_hash", "currentPassword", "newPassword", "token", "secret", "cookie", "authorization", "csrfToken", "sessionToken", "set-cookie", "x-api-key"];
+/** pino redact paths for SECRET_KEYS (a hyphenated key is written in brackets). */
+export const REDACT_PATHS = SECRET_KEYS.flatMap((k) => {
+  const key = /^[A-Za-z_$][\w$]*$/.test(k) ? k : `["${k}"]`;
+  const dot = key.startsWith("[") ? "" : ".";
+  return [key, `*${dot}${key}`, `*.*${dot}${key}`];
+});
+
 const SQL_START = /^\s*(select|insert|update|delete|with|begin|commit|rollback|create|alter|drop|truncate|savepoint|release|set|lock|copy)\b/i;
 const BCRYPT = /\$2[abxy]?\$\d{2}\$[./A-Za-z0-9]{53}/g;
 const QUOTED = /'(?:[^']|'')*'/g;

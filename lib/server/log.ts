@@ -1,7 +1,7 @@
 import "server-only";
 import { AsyncLocalStorage } from "node:async_hooks";
 import pino from "pino";
-import { describeError } from "./log-safe";
+import { REDACT_PATHS, describeError } from "./log-safe";
 
 /** The request a log line belongs to; route() opens one scope per request. */
 interface RequestScope {
@@ -9,14 +9,6 @@ interface RequestScope {
 }
 
 const scope = new AsyncLocalStorage<RequestScope>();
-
-/** Keys whose values never reach the log, at any of the first three levels of a logged object. */
-const SECRET_KEYS = ["password", "passwordHash", "password_hash", "token", "secret", "cookie", "authorization", "csrfToken", "sessionToken", "set-cookie"];
-const redactPaths = SECRET_KEYS.flatMap((k) => {
-  const key = /^[A-Za-z_$][\w$]*$/.test(k) ? k : `["${k}"]`;
-  const dot = key.startsWith("[") ? "" : ".";
-  return [key, `*${dot}${key}`, `*.*${dot}${key}`];
-});
 
 const g = globalThis as unknown as { __bwLog?: pino.Logger };
 
@@ -27,7 +19,7 @@ const g = globalThis as unknown as { __bwLog?: pino.Logger };
 export const log: pino.Logger = (g.__bwLog ??= pino({
   level: process.env.LOG_LEVEL ?? "info",
   base: { pid: process.pid },
-  redact: { paths: redactPaths, censor: "[redacted]" },
+  redact: { paths: REDACT_PATHS, censor: "[redacted]" },
   mixin() {
     const s = scope.getStore();
     return s ? { requestId: s.requestId } : {};

@@ -4,7 +4,7 @@ import sharp from "sharp";
 import { signIn } from "./steps";
 
 /*
- * The pages work under their Content-Security-Policy: the editor (3D view over WebGL, elevation,
+ * The pages work under their Content-Security-Policy (and Permissions-Policy): the editor (3D view over WebGL, elevation,
  * the sheet-nesting worker, the price list), a wall photo uploaded to storage and shown, and the
  * shared read-only page, with no policy violation reported by Chromium.
  */
@@ -25,7 +25,7 @@ async function watchPolicy(context: BrowserContext): Promise<() => Promise<strin
   });
   const onPage = (page: Page) => {
     page.on("console", (m) => {
-      if (/Content Security Policy|Content-Security-Policy|Refused to (load|execute|apply|connect|create|frame)/i.test(m.text())) seen.push(`${m.type()}: ${m.text()}`);
+      if (/Content Security Policy|Content-Security-Policy|Permissions-Policy|Refused to (load|execute|apply|connect|create|frame)/i.test(m.text())) seen.push(`${m.type()}: ${m.text()}`);
     });
     page.on("pageerror", (e) => {
       if (/Content Security Policy|EvalError/i.test(e.message)) seen.push(`pageerror: ${e.message}`);

@@ -37,3 +37,30 @@ describe("what of an error reaches the log", () => {
     expect(describeError({ password: "hunter2" })).toEqual({ class: "object", message: "a non-error value was thrown" });
   });
 });
+
+describe("pino redaction of secret keys", () => {
+  it("censors passwords, hashes, tokens, cookies and authorization at the first three levels", async () => {
+    const { default: pino } = await import("pino");
+    const { REDACT_PATHS } = await import("@/lib/server/log-safe");
+    const lines: string[] = [];
+    const logger = pino({ redact: { paths: REDACT_PATHS, censor: "[redacted]" } }, { write: (s: string) => void lines.push(s) });
+    logger.info(
+      {
+        password: "hunter2-pine",
+        user: { email: "robin@example.test", passwordHash: HASH },
+        req: { headers: { cookie: "next-auth.session-token=abc", authorization: "Bearer xyz", "set-cookie": "a=b" } },
+        body: { token: "tok-123", currentPassword: "old-one", newPassword: "new-one" },
+        fine: "kept",
+      },
+      "a line",
+    );
+    const out = JSON.parse(lines[0]) as Record<string, any>;
+    expect(out.password).toBe("[redacted]");
+    expect(out.user).toEqual({ email: "robin@example.test", passwordHash: "[redacted]" });
+    expect(out.req.headers).toEqual({ cookie: "[redacted]", authorization: "[redacted]", "set-cookie": "[redacted]" });
+    expect(out.body).toEqual({ token: "[redacted]", currentPassword: "[redacted]", newPassword: "[redacted]" });
+    expect(out.fine).toBe("kept");
+    expect(lines[0]).not.toContain("hunter2");
+    expect(lines[0]).not.toContain("$2b$");
+  });
+});
