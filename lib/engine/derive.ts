@@ -6,6 +6,7 @@ import type { FixtureResult } from "./fixtures/place/place-fixture";
 import { placeResolved, resolveFixture } from "./fixtures/place/place-fixture";
 import { COUNTER_KINDS } from "./fixtures/registry";
 import type { FixtureContext } from "./fixtures/types";
+import { PLAN_LIMITS } from "./plan/limits";
 import type { FixtureDoc, PlanDocument } from "./plan/schema";
 import { solveRoom } from "./room/solve";
 import type { SolvedRoom } from "./room/types";
@@ -82,10 +83,26 @@ export function deriveWithNotes(plan: PlanDocument): DeriveReport {
     fixtures,
     obstacles: placeObstacles(plan.room.obstacles, room),
     zones: [...fixtures.flatMap((f) => f.zones), ...roomZones(plan, room)],
-    parts: results.flatMap((r) => r.parts),
+    parts: cappedParts(results, notes),
     hardware: results.flatMap((r) => r.hardware),
   };
   return { derived, notes };
+}
+
+/** Parts of every fixture in plan order, stopping before the plan's piece limit (parsePlan refuses such plans; this guards the rest). */
+function cappedParts(results: readonly FixtureResult[], notes: string[]): FixtureResult["parts"] {
+  const out: FixtureResult["parts"] = [];
+  let pieces = 0;
+  for (const r of results) {
+    const n = r.parts.reduce((s, p) => s + p.qty, 0);
+    if (pieces + n > PLAN_LIMITS.pieces) {
+      notes.push(`Parts stop at ${PLAN_LIMITS.pieces.toLocaleString("en-US")} pieces: fixture ${r.placed.id} and those after it are left out of the parts list.`);
+      break;
+    }
+    pieces += n;
+    for (const p of r.parts) out.push(p);
+  }
+  return out;
 }
 
 /** Derive everything from a plan document (world mm). Unknown kinds and unparsable fixtures are skipped (see deriveWithNotes). */

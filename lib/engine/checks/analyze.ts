@@ -1,5 +1,6 @@
 import type { Derived } from "../derive-types";
 import type { HardwareItem, WorldZone } from "../fixtures/types";
+import { PLAN_LIMITS } from "../plan/limits";
 import type { PlanDocument } from "../plan/schema";
 import type { EvaluateOptions } from "./context";
 import { evaluatePlan } from "./evaluate";
@@ -17,7 +18,10 @@ export interface MaterialTotal {
 
 export interface AnalysisResult {
   summary: { conflicts: number; cautions: number; advice: number; passes: number; fixtures: number };
+  /** Findings, most serious first, at most `maxFindings` of them (the summary counts all). */
   findings: Finding[];
+  /** Findings left out of the list past `maxFindings`. */
+  omittedFindings: number;
   zones: WorldZone[];
   parts: { lines: number; pieces: number; byMaterial: MaterialTotal[]; hardware: Omit<HardwareItem, "fixtureId">[] };
   room: { corners: { x: number; y: number }[]; ceilingHeightMm: number; outOfSquare: { diagonalDifferenceMm: number | null; closureErrorMm: number } };
@@ -26,9 +30,15 @@ export interface AnalysisResult {
 
 const r3 = (v: number) => Math.round(v * 1000) / 1000;
 
-/** Everything the analyze endpoint returns for a plan: findings, zones, a parts summary (mm, m, m^2). */
-export function analyzePlan(plan: PlanDocument, derived: Derived, opts: EvaluateOptions = {}): AnalysisResult {
+/** Options for the analysis answer: the evaluation's, and how many findings to list (default PLAN_LIMITS.analysisFindings). */
+export interface AnalyzeOptions extends EvaluateOptions {
+  maxFindings?: number;
+}
+
+/** Everything the analyze endpoint returns for a plan: findings (capped, most serious first), zones, a parts summary (mm, m, m^2). */
+export function analyzePlan(plan: PlanDocument, derived: Derived, opts: AnalyzeOptions = {}): AnalysisResult {
   const findings = evaluatePlan(plan, derived, opts);
+  const cap = Math.max(0, opts.maxFindings ?? PLAN_LIMITS.analysisFindings);
   const count = (sev: Finding["severity"]) => findings.filter((f) => !f.pass && f.severity === sev).length;
   const mats = new Map<string, MaterialTotal>();
   let pieces = 0;
@@ -49,7 +59,8 @@ export function analyzePlan(plan: PlanDocument, derived: Derived, opts: Evaluate
   }
   return {
     summary: { conflicts: count("conflict"), cautions: count("caution"), advice: count("advice"), passes: findings.filter((f) => f.pass).length, fixtures: derived.fixtures.length },
-    findings,
+    findings: findings.length > cap ? findings.slice(0, cap) : findings,
+    omittedFindings: Math.max(0, findings.length - cap),
     zones: derived.zones,
     parts: {
       lines: derived.parts.length,

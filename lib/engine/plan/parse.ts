@@ -1,4 +1,5 @@
 import { getFixtureKind } from "../fixtures/registry";
+import { PLAN_LIMITS } from "./limits";
 import type { PlanDocument } from "./schema";
 import { planDocumentSchema } from "./schema";
 import { PlanVersionError, upgradePlan } from "./upgrade";
@@ -61,5 +62,24 @@ export function parsePlan(input: unknown): ParsePlanResult {
     return { ...f, params: p.data as Record<string, unknown> };
   });
   if (issues.length) return { ok: false, issues };
+  const pieces = pieceCount(plan, fixtures);
+  if (pieces > PLAN_LIMITS.pieces) {
+    const n = (v: number) => v.toLocaleString("en-US");
+    issues.push({ path: "fixtures", message: `These fixtures make ${n(pieces)} pieces; a plan may have at most ${n(PLAN_LIMITS.pieces)}, more than any real shop needs. Split it into several plans.` });
+    return { ok: false, issues };
+  }
   return { ok: true, plan: { ...plan, fixtures } };
+}
+
+/** Pieces the fixtures make (each part's quantity), counted until past the limit. Bounded: at most PLAN_LIMITS.fixtures kinds' parts. */
+function pieceCount(plan: PlanDocument, fixtures: PlanDocument["fixtures"]): number {
+  const ctx = { settings: plan.settings, materials: plan.materials };
+  let total = 0;
+  for (const f of fixtures) {
+    const kind = getFixtureKind(f.kind);
+    if (!kind) continue;
+    for (const p of kind.parts(f.id, f.params, ctx)) total += p.qty;
+    if (total > PLAN_LIMITS.pieces) break;
+  }
+  return total;
 }
