@@ -13,6 +13,7 @@ import { MM_PER_INCH } from "../units/length";
 /** A length in words for a bound: inches and fractions below 2 ft, feet and inches to 10 ft, whole feet above; with the metric size. */
 export function boundText(mm: number): string {
   if (mm === 0) return "0";
+  if (mm < 0) return `-${boundText(-mm).replace("(", "(-")}`;
   const metric = mm >= 1000 ? `${formatMmNumber(mm / 1000, 2)} m` : `${formatMmNumber(mm)} mm`;
   const inches = mm / MM_PER_INCH;
   if (inches < 24) return `${mixedToText(roundToFraction(inches, 32), "-")} in (${metric})`;
