@@ -1,0 +1,39 @@
+/**
+ * Bundles the server's engine worker (lib/server/engine-pool/worker.ts with lib/engine/) into one
+ * plain JS file inside a build folder, for piscina to load: Next bundles server code, so the pool
+ * needs a real file on disk. Run after `next build` by scripts/lib.sh build_app:
+ *   tsx scripts/build-worker.ts <dist folder>
+ */
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { build } from "esbuild";
+import { WORKER_FILE_NAME } from "../lib/server/engine-pool/worker-file";
+
+const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
+
+/** Writes the worker bundle to `outFile` (CommonJS, Node 20); returns its path. */
+export async function buildEngineWorker(outFile: string): Promise<string> {
+  await build({
+    absWorkingDir: ROOT,
+    entryPoints: ["lib/server/engine-pool/worker.ts"],
+    outfile: outFile,
+    bundle: true,
+    platform: "node",
+    target: "node20",
+    format: "cjs",
+    tsconfig: "tsconfig.json",
+    legalComments: "none",
+    logLevel: "warning",
+  });
+  return outFile;
+}
+
+if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  const dist = process.argv[2];
+  if (!dist) {
+    console.error("usage: tsx scripts/build-worker.ts <dist folder>");
+    process.exit(2);
+  }
+  const out = await buildEngineWorker(path.resolve(ROOT, dist, WORKER_FILE_NAME));
+  console.log(`engine worker bundled: ${path.relative(ROOT, out)}`);
+}
