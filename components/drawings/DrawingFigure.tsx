@@ -8,7 +8,7 @@ interface Props {
   highlight?: readonly string[];
   showKeepClear?: boolean;
   photo?: DrawingPhoto;
-  /** Classes for the scrolling box around the drawing (height, background). */
+  /** Classes for the scrolling box around the drawing. The drawing takes the box's width and its own height. */
   boxClassName?: string;
 }
 
@@ -20,7 +20,7 @@ export function DrawingFigure({ drawing, caption, highlight, showKeepClear, phot
   return (
     <figure className="flex min-w-0 flex-col gap-1">
       <div className={`overflow-auto rounded-lg border border-walnut-100 bg-white p-2 ${boxClassName}`} tabIndex={0} role="group" aria-label={`${drawing.title} (scrolls)`}>
-        <DrawingSvg drawing={drawing} highlight={highlight} showKeepClear={showKeepClear} photo={photo} className="h-full w-full" />
+        <DrawingSvg drawing={drawing} highlight={highlight} showKeepClear={showKeepClear} photo={photo} className="block h-auto w-full" />
       </div>
       {caption && <figcaption className="text-sm text-walnut-700">{caption}</figcaption>}
     </figure>

@@ -31,11 +31,28 @@ export function DrawingSvg({ drawing, highlight = [], showKeepClear = true, phot
   const lit = new Set(highlight);
   const shown = (s: DrawingShape) => !s.layer || showKeepClear || (s.ref !== undefined && lit.has(s.ref));
   const width = b.maxX - b.minX;
+  const mark = (s: DrawingShape, i: number) => {
+    const st = MARK_STYLES[s.role];
+    const on = s.ref !== undefined && lit.has(s.ref);
+    const common = {
+      fill: on && st.fill !== "none" ? HIGHLIGHT.fill : st.fill,
+      fillOpacity: on ? 0.9 : st.opacity,
+      stroke: on ? HIGHLIGHT.stroke : st.stroke,
+      strokeWidth: (on ? HIGHLIGHT.width : st.width) * size,
+      strokeDasharray: st.dash ? `${size * 0.4} ${size * 0.25}` : undefined,
+      strokeLinejoin: "round" as const,
+      "data-role": s.role,
+      "data-ref": s.ref,
+    };
+    const points = s.points.map((p) => `${p.x},${p.y}`).join(" ");
+    return s.type === "polygon" ? <polygon key={i} points={points} {...common} /> : <polyline key={i} points={points} {...common} fill="none" />;
+  };
   return (
     <svg
       viewBox={`${b.minX} ${b.minY} ${width} ${b.maxY - b.minY}`}
       role="img"
-      aria-labelledby={`${id}-t ${id}-d`}
+      aria-labelledby={`${id}-t`}
+      aria-describedby={`${id}-d`}
       className={className}
       style={{ minWidth: `${Math.round((width / size) * minTextPx)}px` }}
       data-drawing={drawing.kind}
@@ -43,24 +60,17 @@ export function DrawingSvg({ drawing, highlight = [], showKeepClear = true, phot
     >
       <title id={`${id}-t`}>{drawing.title}</title>
       <desc id={`${id}-d`}>{drawing.description}</desc>
-      {photo && drawing.photoAnchor && (
-        <image href={photo.url} x={drawing.photoAnchor.x} y={drawing.photoAnchor.y - photo.heightMm} width={photo.widthMm} height={photo.heightMm} opacity={0.6} preserveAspectRatio="none" />
-      )}
       {drawing.shapes.filter(shown).map((s, i) => {
-        const st = MARK_STYLES[s.role];
-        const on = s.ref !== undefined && lit.has(s.ref);
-        const common = {
-          fill: on && st.fill !== "none" ? HIGHLIGHT.fill : st.fill,
-          fillOpacity: on ? 0.9 : st.opacity,
-          stroke: on ? HIGHLIGHT.stroke : st.stroke,
-          strokeWidth: (on ? HIGHLIGHT.width : st.width) * size,
-          strokeDasharray: st.dash ? `${size * 0.4} ${size * 0.25}` : undefined,
-          strokeLinejoin: "round" as const,
-          "data-role": s.role,
-          "data-ref": s.ref,
-        };
-        const points = s.points.map((p) => `${p.x},${p.y}`).join(" ");
-        return s.type === "polygon" ? <polygon key={i} points={points} {...common} /> : <polyline key={i} points={points} {...common} fill="none" />;
+        // A reference photo goes over the wall's face and under everything in front of it.
+        if (s.role === "wall-face" && photo && drawing.photoAnchor) {
+          return (
+            <g key={i}>
+              {mark(s, i)}
+              <image href={photo.url} x={drawing.photoAnchor.x} y={drawing.photoAnchor.y - photo.heightMm} width={photo.widthMm} height={photo.heightMm} opacity={0.6} preserveAspectRatio="none" />
+            </g>
+          );
+        }
+        return mark(s, i);
       })}
       {drawing.dimensions.map((d, i) => (
         <g key={i} stroke={DIMENSION_INK} strokeWidth={size * 0.05} data-chain={d.chain} data-value-mm={d.valueMm}>

@@ -52,7 +52,7 @@ export function SharedPlanView({ document, preset, drawings, kindNames, checks, 
                 <input type="checkbox" checked={keepClear} onChange={(e) => setKeepClear(e.target.checked)} />
                 Show keep-clear zones
               </label>
-              <DrawingFigure drawing={drawings.plan} showKeepClear={keepClear} boxClassName="h-[70vh] min-h-80" />
+              <DrawingFigure drawing={drawings.plan} showKeepClear={keepClear} />
             </div>
           ) : (
             NO_DRAWINGS

@@ -37,7 +37,7 @@ test("an instructor presents a walk-through step by step; a student follows from
   await expect(tp.getByTestId("step-counter")).toHaveText("Step 2 of 3");
   await expect(tp.getByTestId("step-title")).toHaveText("Clear aisle in front of the bench");
   // The highlighted fixture is drawn in the highlight colour, and the rule is linked.
-  await expect(tp.locator('[data-fixture="bench-run"] polygon')).toHaveAttribute("stroke", "#d99a1e");
+  await expect(tp.locator('polygon[data-ref="bench-run"]').first()).toHaveAttribute("stroke", "#d99a1e");
   await expect(tp.getByRole("link", { name: /rule behind this step: walkway/ })).toHaveAttribute("href", "/rules/walkway");
   await tp.screenshot({ path: "tests/artifacts/teaching-step-2.png" });
   await tp.keyboard.press("ArrowRight");

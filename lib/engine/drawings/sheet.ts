@@ -53,7 +53,10 @@ export function finishDrawing(d: Omit<Drawing, "bounds">): Drawing {
   return { ...rounded, bounds: boundsOf(rounded, d.textSizeMm) };
 }
 
-/** Text height for a drawing of this extent, mm: about a seventieth of its larger side, within sensible limits. */
+/**
+ * Text height for a drawing of this extent, mm: a 55th of its larger side (our own choice: about
+ * 12 px when a garage-sized plan fills a laptop screen's height), within sensible limits.
+ */
 export function textSizeFor(extentMm: number): number {
-  return Math.round(Math.min(250, Math.max(40, extentMm / 70)));
+  return Math.round(Math.min(300, Math.max(40, extentMm / 55)));
 }
