@@ -18,6 +18,9 @@ export default defineConfig({
     emit: "ts",
     snapshot: true,
   },
-  pool: { min: 0, max: Number(process.env.DB_POOL_MAX ?? 10) },
+  // Recovery after PostgreSQL restarts is the pool's own work (a connection that errored is marked
+  // and never handed out again); these bound how long a request waits while the database is away.
+  pool: { min: 0, max: Number(process.env.DB_POOL_MAX ?? 10), acquireTimeoutMillis: 10_000, idleTimeoutMillis: 30_000 },
+  driverOptions: { connection: { connectionTimeoutMillis: 5_000, keepAlive: true } },
   debug: false,
 });
