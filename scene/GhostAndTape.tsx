@@ -2,19 +2,23 @@
 import { Html } from "@react-three/drei";
 import { useThree } from "@react-three/fiber";
 import { useEffect, useState } from "react";
+import { MathUtils } from "three";
 import { Line2 } from "three/examples/jsm/lines/Line2.js";
 import { LineGeometry } from "three/examples/jsm/lines/LineGeometry.js";
 import { LineMaterial } from "three/examples/jsm/lines/LineMaterial.js";
 import type { Placement } from "@/lib/engine/plan/schema";
 import type { SolvedWall } from "@/lib/engine/room/types";
+import { frameOfWall, wallHeading, wallToWorld } from "@/lib/engine/room/wall-frame";
 import { useEditor } from "@/lib/client/react/EditorContext";
 import { useUi } from "@/lib/client/react/useEditorState";
 
-/** Where a placement puts a fixture's local frame: wall start + offset along it, facing the room. */
+/** Where a placement puts a fixture's local frame: on a wall through the engine's wall frame (offset along it, facing the room), or free. */
 function frameOf(p: Placement, wall: SolvedWall | undefined): { x: number; y: number; z: number; rot: number } | null {
-  if (p.mode === "free") return { x: p.xMm, y: p.yMm, z: p.elevationMm, rot: (p.rotationDeg * Math.PI) / 180 };
+  if (p.mode === "free") return { x: p.xMm, y: p.yMm, z: p.elevationMm, rot: MathUtils.degToRad(p.rotationDeg) };
   if (!wall) return null;
-  return { x: wall.start.x + wall.dir.x * p.offsetMm, y: wall.start.y + wall.dir.y * p.offsetMm, z: p.elevationMm, rot: Math.atan2(wall.dir.y, wall.dir.x) };
+  const f = frameOfWall(wall);
+  const o = wallToWorld(f, p.offsetMm, 0);
+  return { x: o.x, y: o.y, z: p.elevationMm, rot: wallHeading(f) };
 }
 
 /** The fixture about to be placed, translucent under the pointer. */

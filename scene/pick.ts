@@ -1,7 +1,7 @@
 import { Plane, Raycaster, Vector2, Vector3, type Camera, type Object3D } from "three";
 import type { SolvedRoom } from "@/lib/engine/room/types";
 import type { Hit } from "@/lib/client/tools/types";
-import { nearestWall } from "@/lib/client/tools/wall-math";
+import { nearestWall } from "@/lib/engine/room/wall-frame";
 import { M } from "./units";
 
 const raycaster = new Raycaster();

@@ -1,6 +1,7 @@
 import type { Vec2 } from "@/lib/engine/geometry/types";
 import type { Placement } from "@/lib/engine/plan/schema";
 import type { SolvedWall } from "@/lib/engine/room/types";
+import { distanceToWallSegment, frameOfWall, worldToWall } from "@/lib/engine/room/wall-frame";
 import type { Editor } from "../editor";
 import { setPlacement } from "../store/fixture-ops";
 import { groupMembers, moveGroup, type GroupMember } from "./group-move";
@@ -8,7 +9,6 @@ import { createIdle } from "./idle";
 import { wallSpans, SNAP_THRESHOLD_MM } from "./neighbours";
 import { snapAlongWall, snapToGrid } from "./snap";
 import type { PointerInput, ToolState } from "./types";
-import { alongWall, distanceToWall, fromWall } from "./wall-math";
 
 /**
  * How near (mm) the pointer must come to another wall for a fixture dragged alone to move onto it
@@ -26,15 +26,16 @@ const REATTACH_MARGIN_MM = 20;
 export function wallToJoin(walls: readonly SolvedWall[], p: Vec2, currentId: string, bandMm: number): SolvedWall | undefined {
   const current = walls.find((w) => w.id === currentId);
   if (current) {
-    const t = alongWall(current, p);
-    if (t >= 0 && t <= current.lengthMm && fromWall(current, p) <= bandMm) return undefined;
+    const f = frameOfWall(current);
+    const { offsetAlongMm: t, distanceFromWallMm: out } = worldToWall(f, p);
+    if (t >= 0 && t <= f.lengthMm && out <= bandMm) return undefined;
   }
-  const dCurrent = current ? distanceToWall(current, p) : Infinity;
+  const dCurrent = current ? distanceToWallSegment(frameOfWall(current), p) : Infinity;
   let best: SolvedWall | undefined;
   let bestD = Math.min(REATTACH_MM, dCurrent - REATTACH_MARGIN_MM);
   for (const w of walls) {
     if (w.id === currentId) continue;
-    const d = distanceToWall(w, p);
+    const d = distanceToWallSegment(frameOfWall(w), p);
     if (d < bestD) {
       bestD = d;
       best = w;
@@ -87,7 +88,7 @@ export function createDragging(leadId: string, grab: Vec2): ToolState {
     if (!wall) return start;
     wallId = wall.id;
     const snapped = snapAlongWall({
-      offsetMm: alongWall(wall, input.point) - holdAlong + m.extent.x0,
+      offsetMm: worldToWall(frameOfWall(wall), input.point).offsetAlongMm - holdAlong + m.extent.x0,
       widthMm: m.extent.x1 - m.extent.x0,
       wallLengthMm: wall.lengthMm,
       neighbours: spansOn(ed, wall.id),
@@ -106,7 +107,8 @@ export function createDragging(leadId: string, grab: Vec2): ToolState {
     if (!wall) return { x: 0, y: 0 };
     const along = now.offsetMm - start.offsetMm;
     const snap = ed.ui.getState().snapping && !input.alt;
-    const acrossRaw = fromWall(wall, input.point) - fromWall(wall, grab);
+    const frame = frameOfWall(wall);
+    const acrossRaw = worldToWall(frame, input.point).distanceFromWallMm - worldToWall(frame, grab).distanceFromWallMm;
     const across = snap ? snapToGrid(acrossRaw, ed.gridStepMm()) : acrossRaw;
     return { x: wall.dir.x * along + wall.inward.x * across, y: wall.dir.y * along + wall.inward.y * across };
   }
@@ -121,7 +123,7 @@ export function createDragging(leadId: string, grab: Vec2): ToolState {
       if (lead?.start.mode === "wall") {
         const wall = ed.wall(lead.start.wallId);
         wallId = lead.start.wallId;
-        holdAlong = wall ? alongWall(wall, grab) - lead.start.offsetMm : 0;
+        holdAlong = wall ? worldToWall(frameOfWall(wall), grab).offsetAlongMm - lead.start.offsetMm : 0;
         depth = ed.footprint(leadId)?.depthMm ?? 0;
       }
       ed.history.beginGesture();

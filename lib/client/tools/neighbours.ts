@@ -1,5 +1,5 @@
 import type { Editor } from "../editor";
-import { alongWall } from "./wall-math";
+import { frameOfWall, worldToWall } from "@/lib/engine/room/wall-frame";
 
 /**
  * A wall fixture's extent along its wall relative to its offset, mm: what it really occupies
@@ -11,7 +11,8 @@ export function wallExtent(ed: Editor, id: string): { x0: number; x1: number } {
   if (f?.placement.mode === "wall" && placed) {
     const wall = ed.wall(f.placement.wallId);
     if (wall && placed.body.polygon.length) {
-      const along = placed.body.polygon.map((p) => alongWall(wall, p) - (f.placement.mode === "wall" ? f.placement.offsetMm : 0));
+      const frame = frameOfWall(wall);
+      const along = placed.body.polygon.map((p) => worldToWall(frame, p).offsetAlongMm - (f.placement.mode === "wall" ? f.placement.offsetMm : 0));
       return { x0: Math.min(...along), x1: Math.max(...along) };
     }
   }

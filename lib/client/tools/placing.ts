@@ -6,7 +6,7 @@ import { createIdle } from "./idle";
 import { wallSpans, SNAP_THRESHOLD_MM } from "./neighbours";
 import { snapAlongWall, snapToGrid } from "./snap";
 import type { PointerInput, ToolState } from "./types";
-import { alongWall } from "./wall-math";
+import { frameOfWall, worldToWall } from "@/lib/engine/room/wall-frame";
 
 /** Where a new fixture of `kind` would go for this pointer: centred on the pointer, snapped. */
 export function placementFor(ed: Editor, kind: string, params: Record<string, unknown>, input: PointerInput): Placement | null {
@@ -17,7 +17,7 @@ export function placementFor(ed: Editor, kind: string, params: Record<string, un
     const wall = ed.wall(input.hit.wallId);
     if (!wall) return null;
     const { offsetMm } = snapAlongWall({
-      offsetMm: alongWall(wall, input.point) - fp.widthMm / 2,
+      offsetMm: worldToWall(frameOfWall(wall), input.point).offsetAlongMm - fp.widthMm / 2,
       widthMm: fp.widthMm,
       wallLengthMm: wall.lengthMm,
       neighbours: wallSpans(ed, wall.id, new Set()),

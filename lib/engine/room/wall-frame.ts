@@ -56,3 +56,24 @@ export function wallHeading(frame: WallFrame): number {
 export function fromViewersLeft(frame: WallFrame, offsetAlongMm: number): number {
   return frame.lengthMm - offsetAlongMm;
 }
+
+/** Distance of a floor point from the wall itself (the segment between its corners, not the endless line), mm. */
+export function distanceToWallSegment(frame: WallFrame, p: Vec2): number {
+  const { offsetAlongMm: t, distanceFromWallMm: d } = worldToWall(frame, p);
+  const past = t < 0 ? -t : t > frame.lengthMm ? t - frame.lengthMm : 0;
+  return Math.hypot(past, d);
+}
+
+/** The wall nearest a floor point, within `maxMm` of its segment (mm), or undefined. */
+export function nearestWall(walls: readonly SolvedWall[], p: Vec2, maxMm = Infinity): SolvedWall | undefined {
+  let best: SolvedWall | undefined;
+  let bestD = maxMm;
+  for (const w of walls) {
+    const d = distanceToWallSegment(frameOfWall(w), p);
+    if (d < bestD) {
+      bestD = d;
+      best = w;
+    }
+  }
+  return best;
+}

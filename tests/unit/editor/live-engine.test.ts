@@ -61,7 +61,7 @@ describe("incremental analysis", () => {
 
 describe("snapping to what a fixture really occupies", () => {
   it("a cabinet dragged to the wall start snaps its body (with overhangs) to the corner, not past it", async () => {
-    const { alongWall } = await import("@/lib/client/tools/wall-math");
+    const { frameOfWall, worldToWall } = await import("@/lib/engine/room/wall-frame");
     const ed = new Editor({ doc: newPlanDocument(), engine: liveEngine });
     const id = place(ed, "base-cabinet", 600);
     ed.ui.setState({ snapping: true, gridSize: "normal" });
@@ -70,7 +70,7 @@ describe("snapping to what a fixture really occupies", () => {
     ed.tools.down({ point: at(900), hit: { type: "fixture", id } });
     ed.tools.move({ point: at(320), hit: { type: "fixture", id } });
     ed.tools.up({ point: at(320), hit: { type: "fixture", id } });
-    const body = ed.placed(id)!.body.polygon.map((p) => alongWall(wall, p));
+    const body = ed.placed(id)!.body.polygon.map((p) => worldToWall(frameOfWall(wall), p).offsetAlongMm);
     // The body's first edge lands on the corner (within float noise): 0 mm along the wall.
     expect(Math.min(...body)).toBeCloseTo(0, 6);
     const outside = ed.derived.getState().findings.filter((f) => f.ruleId === "in-room" && !f.pass && f.fixtureIds.includes(id));

@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { solveRoom } from "@/lib/engine/room/solve";
-import { wallFrame, wallHeading, wallToWorld, worldToWall } from "@/lib/engine/room/wall-frame";
+import { distanceToWallSegment, fromViewersLeft, nearestWall, wallFrame, wallHeading, wallToWorld, worldToWall } from "@/lib/engine/room/wall-frame";
 import { pointInPolygon, polygonArea, polygonPerimeter, signedArea } from "@/lib/engine/geometry/polygon";
 
 const room = solveRoom({ walls: [6000, 5000, 6000, 5000].map((lengthMm, i) => ({ id: `w${i + 1}`, lengthMm })) });
@@ -42,6 +42,29 @@ describe("wall frames", () => {
         expect(back.distanceFromWallMm).toBeCloseTo(d, 6);
       }),
     );
+  });
+});
+
+describe("distances to walls and the viewer's left", () => {
+  it("measures to the wall's segment, past its corners too", () => {
+    const f = wallFrame(room, "w1")!;
+    // Wall 1 runs (0,0) to (6000,0). In front of it: straight out; past its end: to the corner.
+    expect(distanceToWallSegment(f, { x: 3000, y: 400 })).toBeCloseTo(400, 9);
+    expect(distanceToWallSegment(f, { x: 6300, y: 400 })).toBeCloseTo(500, 9);
+    expect(distanceToWallSegment(f, { x: -300, y: -400 })).toBeCloseTo(500, 9);
+  });
+
+  it("finds the nearest wall within reach, and none beyond it", () => {
+    expect(nearestWall(room.walls, { x: 5900, y: 2500 })?.id).toBe("w2");
+    expect(nearestWall(room.walls, { x: 3000, y: 4800 }, 350)?.id).toBe("w3");
+    expect(nearestWall(room.walls, { x: 3000, y: 2500 }, 350)).toBeUndefined();
+  });
+
+  it("puts the wall's start corner on the right of a person facing it from the room", () => {
+    const f = wallFrame(room, "w1")!;
+    // Facing wall 1 (south) from inside, the person looks toward -y: their right is toward -x, where the start (0,0) is.
+    expect(fromViewersLeft(f, 0)).toBeCloseTo(6000, 9);
+    expect(fromViewersLeft(f, 6000)).toBeCloseTo(0, 9);
   });
 });
 
