@@ -22,6 +22,7 @@ const current = async (w: World, id: string) => ok(await w.c.owner.client.get(`/
 
 export const planEntries: Entry[] = [
   { file: "auth/[...nextauth]/route.ts", method: "GET", call: () => ({ path: "/api/auth/csrf" }), expect: everyone(200) },
+  { file: "health/route.ts", method: "GET", call: () => ({ path: "/api/health" }), expect: everyone(200), note: "for load balancers: no session needed" },
   // The auth endpoints take forms only: a JSON post is refused before next-auth sees it, whoever sends it.
   { file: "auth/[...nextauth]/route.ts", method: "POST", call: () => ({ path: "/api/auth/callback/credentials", body: {} }), expect: everyone(415) },
   { file: "v1/account/route.ts", method: "POST", call: () => ({ path: "/api/v1/account", body: { name: "Matrix", email: `m-${randomUUID().slice(0, 8)}@example.test`, password: "Cedar-and-elm-31" } }), expect: everyone(201), note: "sign-up is open to anyone" },
