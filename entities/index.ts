@@ -6,6 +6,7 @@ import { PlanSchema } from "./Plan";
 import { PlanMemberSchema } from "./PlanMember";
 import { PlanRevisionSchema } from "./PlanRevision";
 import { PriceListSchema } from "./PriceList";
+import { RateBucketSchema } from "./RateBucket";
 import { RulePresetSchema } from "./RulePreset";
 import { ShareLinkSchema } from "./ShareLink";
 import { UserSchema } from "./User";
@@ -27,4 +28,5 @@ export const entities = [
   RulePresetSchema,
   WalkthroughSchema,
   WallPhotoSchema,
+  RateBucketSchema,
 ];

@@ -4,18 +4,13 @@
  */
 import { MikroORM } from "@mikro-orm/postgresql";
 import config from "../mikro-orm.config";
-import { UserSchema, type AccountRole } from "../entities/User";
+import { UserSchema } from "../entities/User";
 import { PlanSchema } from "../entities/Plan";
 import { hashPassword } from "../lib/server/passwords";
 import { demoPlan } from "../lib/engine/demo/demo-plan";
 import { parsePlan } from "../lib/engine/plan/parse";
 
-export const DEMO_PASSWORD = "sawdust-and-pine-42";
-const ACCOUNTS: { email: string; name: string; role: AccountRole }[] = [
-  { email: "robin@demo.benchwright.test", name: "Robin Alder", role: "member" },
-  { email: "ines@demo.benchwright.test", name: "Ines Larch", role: "instructor" },
-  { email: "avery@demo.benchwright.test", name: "Avery Birch", role: "admin" },
-];
+import { DEMO_ACCOUNTS as ACCOUNTS, DEMO_PASSWORD, demoBanner } from "./demo-accounts";
 
 async function main() {
   const orm = await MikroORM.init({ ...config, clientUrl: process.env.DATABASE_URL ?? config.clientUrl });
@@ -35,6 +30,8 @@ async function main() {
     await em.flush();
   }
   await orm.close();
+  // The only line on stdout: scripts/start.sh shows it in its banner.
+  console.log(demoBanner());
 }
 
 main().catch((e) => {

@@ -3,7 +3,6 @@ import { notFound } from "next/navigation";
 import { Presenter } from "@/components/teaching/Presenter";
 import type { Step } from "@/components/teaching/steps";
 import { requestEm } from "@/lib/server/db";
-import { planDrawingsOrNull } from "@/lib/engine/drawings/plan-drawings";
 import { AppError } from "@/lib/server/errors";
 import { currentUser } from "@/lib/server/session";
 import { analyseForReading } from "@/lib/server/services/shared-analysis";
@@ -26,6 +25,6 @@ export default async function PresentPage({ params, searchParams }: Props) {
     if (e instanceof AppError && e.status === 404) notFound();
     throw e;
   }
-  const { findings } = analyseForReading(w.document, w.preset ? { name: w.preset.name, numbers: w.preset.numbers } : null);
-  return <Presenter title={w.title} planName={w.planName} ownerName={w.ownerName} steps={w.steps as Step[]} document={w.document} drawings={planDrawingsOrNull(w.document)} presetName={w.preset?.name ?? null} findings={findings} />;
+  const { findings, drawings } = await analyseForReading(w.document, w.preset ? { name: w.preset.name, numbers: w.preset.numbers } : null);
+  return <Presenter title={w.title} planName={w.planName} ownerName={w.ownerName} steps={w.steps as Step[]} document={w.document} drawings={drawings} presetName={w.preset?.name ?? null} findings={findings} />;
 }

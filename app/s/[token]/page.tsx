@@ -4,7 +4,6 @@ import { ReadOnlyFindings } from "@/components/sharing/ReadOnlyFindings";
 import { PartsView } from "@/components/parts/PartsView";
 import { CopyPlanButton } from "@/components/sharing/CopyPlanButton";
 import { SharedPlanView } from "@/components/sharing/SharedPlanView";
-import { planDrawingsOrNull } from "@/lib/engine/drawings/plan-drawings";
 import { FIXTURE_KINDS } from "@/lib/engine/fixtures/registry";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
@@ -31,7 +30,7 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
   }
   const preset = await presetOfDocument(em, plan.document);
   const user = await sessionUser();
-  const analysis = analyseForReading(plan.document, preset ? { name: preset.name, numbers: preset.numbers } : null);
+  const analysis = await analyseForReading(plan.document, preset ? { name: preset.name, numbers: preset.numbers } : null);
   return (
     <div className="mx-auto flex max-w-6xl flex-col gap-4 px-4 py-6">
       <header className="flex flex-wrap items-end justify-between gap-3">
@@ -50,7 +49,7 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
       <SharedPlanView
         document={plan.document}
         preset={preset ? { name: preset.name, ownerName: preset.ownerName, numbers: preset.numbers as Record<string, number> } : null}
-        drawings={planDrawingsOrNull(plan.document)}
+        drawings={analysis.drawings}
         kindNames={Object.fromEntries(FIXTURE_KINDS.map((k) => [k.kind, k.title]))}
         checks={analysis.error ? <p className="text-sm text-brick-700">{analysis.error}</p> : <ReadOnlyFindings findings={analysis.findings} />}
         parts={<PartsView plan={plan.document} />}

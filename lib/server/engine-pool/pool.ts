@@ -23,14 +23,14 @@ export interface RunOptions {
   timeLimitMs: number;
   /** The request's signal: a client that goes away ends its task too. */
   signal?: AbortSignal;
-  /** What the task does, in words for the error message ("analyse this plan", "write this CSV"). */
+  /** What the task does to the plan, in words for the error message: "analyse", "turn into a parts list". */
   doing: string;
 }
 
 /** The errors a pool call answers with: plain words, never the worker's own message. */
 export const poolErrors = {
   tooSlow: (doing: string, ms: number) =>
-    new AppError(503, "too_slow", `This plan takes too long to ${doing} on the server (over ${Math.round(ms / 1000)} s), so it was stopped. The editor runs the same checks in your browser; a plan with fewer fixtures also answers faster.`),
+    new AppError(503, "too_slow", `This plan takes too long to ${doing} on the server (over ${Math.round(ms / 1000)} s), so it was stopped. A plan with fewer fixtures answers faster (the editor also runs the checks in your browser).`),
   tooBig: (doing: string) =>
     new AppError(413, "too_large", `This plan needs more memory to ${doing} than the server gives one request, so it was stopped. A plan with fewer fixtures or parts will fit.`),
   busy: () =>

@@ -1,8 +1,6 @@
 import type { EntityManager } from "@mikro-orm/postgresql";
 import type { User } from "@/entities/User";
-import { derivePlan } from "@/lib/engine/derive";
-import { partsCsv, shoppingCsv } from "@/lib/engine/shopping/csv";
-import { materialsReport } from "@/lib/engine/shopping/plan-shopping";
+import { partsCsvInWorker, shoppingCsvInWorker } from "../engine-pool/engine";
 import { getPlan } from "./plans";
 import { getPriceList } from "./prices";
 
@@ -13,24 +11,15 @@ export interface CsvFile {
 
 const slug = (name: string) => name.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "plan";
 
-/** The plan's parts list as CSV, sizes in the plan's units and in mm (viewer access or better). */
-export async function planPartsCsv(em: EntityManager, user: User, planId: string): Promise<CsvFile> {
+/** The plan's parts list as CSV, sizes in the plan's units and in mm (viewer access or better); worked out in the engine's worker pool. */
+export async function planPartsCsv(em: EntityManager, user: User, planId: string, opts: { signal?: AbortSignal } = {}): Promise<CsvFile> {
   const plan = await getPlan(em, user, planId);
-  const d = derivePlan(plan.document);
-  return { filename: `${slug(plan.name)}-parts.csv`, text: partsCsv(d.parts, plan.document.materials, plan.document.settings) };
+  return { filename: `${slug(plan.name)}-parts.csv`, text: await partsCsvInWorker(plan.document, opts) };
 }
 
-/** The plan's shopping list as CSV, priced with the requesting account's price list. */
-export async function planShoppingCsv(em: EntityManager, user: User, planId: string, opts: { wasteAllowancePct?: number } = {}): Promise<CsvFile> {
+/** The plan's shopping list as CSV, priced with the requesting account's price list; worked out in the engine's worker pool. */
+export async function planShoppingCsv(em: EntityManager, user: User, planId: string, opts: { wasteAllowancePct?: number; signal?: AbortSignal } = {}): Promise<CsvFile> {
   const plan = await getPlan(em, user, planId);
   const prices = await getPriceList(em, user);
-  const d = derivePlan(plan.document);
-  const doc = plan.document;
-  // A fixed seed and attempt cap keep the export the same on every download.
-  const r = materialsReport(d.parts, d.hardware, doc.materials, prices.items, {
-    kerfMm: doc.settings.kerfMm,
-    nest: { seed: 1, maxAttempts: 120, timeBudgetMs: 2000 },
-    shopping: { wasteAllowancePct: opts.wasteAllowancePct },
-  });
-  return { filename: `${slug(plan.name)}-shopping.csv`, text: shoppingCsv(r.shopping) };
+  return { filename: `${slug(plan.name)}-shopping.csv`, text: await shoppingCsvInWorker(plan.document, prices.items, opts.wasteAllowancePct, { signal: opts.signal }) };
 }

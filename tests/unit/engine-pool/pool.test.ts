@@ -36,22 +36,22 @@ async function rejection(p: Promise<unknown>): Promise<AppError> {
 
 describe("engine worker pool", () => {
   it("runs a task in a worker and answers with its result", async () => {
-    const text = await pool.run<unknown, string>("analyze", { plan: newPlanDocument(), maxAnswerBytes: 1_000_000 }, { timeLimitMs: 30_000, doing: "analyse this plan" });
+    const text = await pool.run<unknown, string>("analyze", { plan: newPlanDocument(), maxAnswerBytes: 1_000_000 }, { timeLimitMs: 30_000, doing: "analyse" });
     const answer = JSON.parse(text);
     expect(answer.summary.fixtures).toBe(0);
     expect(Array.isArray(answer.findings)).toBe(true);
   });
 
   it("stops a task over its time limit with a 503 in words, and answers the next task", async () => {
-    const e = await rejection(pool.run("testHook", { hook: "spin" }, { timeLimitMs: 500, doing: "analyse this plan" }));
+    const e = await rejection(pool.run("testHook", { hook: "spin" }, { timeLimitMs: 500, doing: "analyse" }));
     expect(e.status).toBe(503);
     expect(e.code).toBe("too_slow");
-    expect(e.message).toMatch(/takes too long to analyse this plan on the server/);
+    expect(e.message).toMatch(/takes too long to analyse on the server/);
     await expect(pool.run("ping", {}, { timeLimitMs: 30_000, doing: "answer" })).resolves.toBe("pong");
   });
 
   it("ends a worker that runs out of its heap with a 413, and a new worker takes the next task", async () => {
-    const e = await rejection(pool.run("testHook", { hook: "hog" }, { timeLimitMs: 60_000, doing: "analyse this plan" }));
+    const e = await rejection(pool.run("testHook", { hook: "hog" }, { timeLimitMs: 60_000, doing: "analyse" }));
     expect(e.status).toBe(413);
     expect(e.code).toBe("too_large");
     expect(e.message).toMatch(/more memory/);

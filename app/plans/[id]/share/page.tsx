@@ -7,10 +7,10 @@ import { WallPhotos } from "@/components/sharing/WallPhotos";
 import { PeopleSection } from "@/components/sharing/PeopleSection";
 import { requestEm } from "@/lib/server/db";
 import { AppError } from "@/lib/server/errors";
-import { planDrawingsOrNull } from "@/lib/engine/drawings/plan-drawings";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { accessPlan } from "@/lib/server/policy";
 import { currentUser } from "@/lib/server/session";
+import { drawingsForReading } from "@/lib/server/services/shared-analysis";
 
 export const metadata: Metadata = { title: "Share" };
 
@@ -29,6 +29,7 @@ export default async function SharePage({ params }: { params: Promise<{ id: stri
   }
   const isOwner = access.role === "owner";
   const document = access.plan.document as unknown as PlanDocument;
+  const drawings = await drawingsForReading(document);
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-8 px-4 py-6">
       <header>
@@ -38,7 +39,7 @@ export default async function SharePage({ params }: { params: Promise<{ id: stri
       {isOwner && <LinksSection planId={id} />}
       <PeopleSection planId={id} isOwner={isOwner} />
       <PresetPicker planId={id} canEdit={access.role !== "viewer"} />
-      <WallPhotos planId={id} document={document} canEdit={access.role !== "viewer"} elevations={planDrawingsOrNull(document)?.elevations ?? []} />
+      <WallPhotos planId={id} document={document} canEdit={access.role !== "viewer"} elevations={drawings?.elevations ?? []} />
     </div>
   );
 }
