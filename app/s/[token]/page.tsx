@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ReadOnlyFindings } from "@/components/sharing/ReadOnlyFindings";
-import { PartsView } from "@/components/parts/PartsView";
 import { CopyPlanButton } from "@/components/sharing/CopyPlanButton";
+import { SharedParts } from "@/components/sharing/SharedParts";
 import { SharedPlanView } from "@/components/sharing/SharedPlanView";
 import { FIXTURE_KINDS } from "@/lib/engine/fixtures/registry";
 import { requestEm } from "@/lib/server/db";
@@ -52,7 +52,7 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
         drawings={analysis.drawings}
         kindNames={Object.fromEntries(FIXTURE_KINDS.map((k) => [k.kind, k.title]))}
         checks={analysis.error ? <p className="text-sm text-brick-700">{analysis.error}</p> : <ReadOnlyFindings findings={analysis.findings} />}
-        parts={<PartsView plan={plan.document} />}
+        parts={<SharedParts plan={plan.document} />}
       />
     </div>
   );
