@@ -38,5 +38,5 @@ export function currentRequestId(): string | undefined {
 
 /** Logs a caught error by class, code and a message with SQL and its parameters removed. */
 export function logError(msg: string, e: unknown, extra: Record<string, unknown> = {}): void {
-  log.error({ ...extra, err: describeError(e) }, msg);
+  log.error({ ...extra, error: describeError(e) }, msg);
 }

@@ -2,7 +2,7 @@
  * Fuzz every write route under app/api/v1 (POST, PUT, PATCH, DELETE found on disk) with seeded,
  * generated bodies, as a signed-in instructor owning a plan: never a 5xx, never internal text in an
  * answer, and afterwards every stored plan (and revision) still parses with the engine.
- * Bounded in time: each route gets up to BW_FUZZ_RUNS bodies (200), at least BW_FUZZ_MIN_RUNS (40),
+ * Bounded in time: each route gets up to BW_FUZZ_RUNS bodies (200), at least BW_FUZZ_MIN_RUNS (25),
  * and stops sending at BW_FUZZ_BUDGET_MS (800 ms) past the minimum, so a loaded machine sends a
  * shorter prefix of the same seeded sequence. BW_FUZZ_SEED picks another sequence.
  */
@@ -15,7 +15,7 @@ import { TARGETS, buildFuzzWorld, fallbackTarget, writeRoutesOnDisk, type FuzzWo
 
 const SEED = Number(process.env.BW_FUZZ_SEED ?? 20261202);
 const RUNS = Number(process.env.BW_FUZZ_RUNS ?? 200);
-const MIN_RUNS = Number(process.env.BW_FUZZ_MIN_RUNS ?? 40);
+const MIN_RUNS = Number(process.env.BW_FUZZ_MIN_RUNS ?? 25);
 const BUDGET_MS = Number(process.env.BW_FUZZ_BUDGET_MS ?? 800);
 const IN_FLIGHT = Number(process.env.BW_FUZZ_IN_FLIGHT ?? 8);
 const TIMEOUT_MS = 20_000;
