@@ -4,9 +4,10 @@ import { PlanMemberSchema } from "@/entities/PlanMember";
 import { PlanRevisionSchema } from "@/entities/PlanRevision";
 import type { User } from "@/entities/User";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
-import { conflict, notFound } from "../errors";
+import { conflict, forbidden, notFound } from "../errors";
 import { accessPlan, type PlanRole } from "../policy";
 import { blankDocument, validateDocument } from "./plan-document";
+import { saveDocument } from "./plan-save";
 
 /** Soft-deleted plans stay restorable this long. */
 export const RESTORE_DAYS = 30;
@@ -78,25 +79,31 @@ export async function getPlan(em: EntityManager, user: User, id: string): Promis
 }
 
 /**
- * Saves a new document if `version` is the stored one (optimistic locking; a row lock serialises
- * concurrent saves). The replaced document is kept as a revision. Stale: 409, nothing written.
+ * Saves a new document if `version` is the stored one (optimistic locking; concurrent saves queue
+ * on the row lock and all but the first at a version answer 409). The replaced document is kept as
+ * a revision. Stale: 409, nothing written. One statement, one round trip (see plan-save.ts).
  */
 export async function updatePlan(em: EntityManager, user: User, id: string, input: { document: unknown; version: number; name?: string }): Promise<PlanDetail> {
   const document = validateDocument(input.document);
-  return em.transactional(async (tx) => {
-    const { plan, role } = await accessPlan(tx, id, user, "editor", { withDocument: true, lock: true });
-    if (plan.version !== input.version) {
-      throw conflict(`This plan was changed elsewhere (now version ${plan.version}, yours is ${input.version}). Nothing was overwritten.`, { currentVersion: plan.version });
-    }
-    tx.create(PlanRevisionSchema, { plan, version: plan.version, name: plan.name, document: plan.document, author: user });
-    plan.document = document as unknown as Record<string, unknown>;
-    plan.units = document.settings.units;
-    if (input.name) plan.name = input.name;
-    plan.version += 1;
-    plan.updatedAt = new Date();
-    await tx.flush();
-    return detail(plan, role);
-  });
+  const saved = await saveDocument(em, { planId: id, userId: user.id, version: input.version, documentJson: JSON.stringify(document), units: document.settings.units, name: input.name || undefined });
+  if (saved.kind === "missing") throw notFound("That plan");
+  if (saved.kind === "read-only") throw forbidden("You can look at this plan but not change it.");
+  if (saved.kind === "stale") {
+    throw conflict(`This plan was changed elsewhere (now version ${saved.currentVersion}, yours is ${input.version}). Nothing was overwritten.`, { currentVersion: saved.currentVersion });
+  }
+  return {
+    id,
+    name: saved.name,
+    units: saved.units,
+    version: saved.version,
+    role: saved.role,
+    ownerName: saved.ownerName,
+    createdAt: saved.createdAt.toISOString(),
+    updatedAt: saved.updatedAt.toISOString(),
+    deletedAt: null,
+    copiedFrom: saved.copiedFrom,
+    document,
+  };
 }
 
 export async function renamePlan(em: EntityManager, user: User, id: string, name: string): Promise<PlanSummary> {
