@@ -4,7 +4,7 @@
  * replaced one into the history), every accepted save is in the history, and nothing else is.
  */
 import { describe, it, expect, beforeAll } from "vitest";
-import { Client, hasServer, newMember, type Res } from "./helpers/client";
+import { type Client, hasServer, newMember, type Res } from "./helpers/client";
 
 const doc = (wallMm: number) => ({
   schemaVersion: 1,
