@@ -2,32 +2,13 @@ import NextAuth from "next-auth";
 import { NextRequest } from "next/server";
 import { SIGN_IN_CODES, authOptions } from "@/lib/server/auth";
 import { errorResponse, toErrorResponse } from "@/lib/server/http";
+import { log } from "@/lib/server/log";
+import { readBodyText } from "@/lib/server/request-body";
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };
 
 /** Sign-in, sign-out and CSRF forms are small; nothing larger is read. */
 const MAX_FORM_BYTES = 16_000;
-
-class TooLarge extends Error {}
-
-async function readCapped(req: Request): Promise<string> {
-  if (Number(req.headers.get("content-length") ?? 0) > MAX_FORM_BYTES) throw new TooLarge();
-  if (!req.body) return "";
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > MAX_FORM_BYTES) {
-      await reader.cancel().catch(() => undefined);
-      throw new TooLarge();
-    }
-    chunks.push(value);
-  }
-  return Buffer.concat(chunks).toString("utf8");
-}
 
 /** Status and message for the error code the sign-in step put in its answer's URL. */
 function signInStatus(code: string | null): { status: number; message: string; retryAfter?: number } | null {
@@ -78,17 +59,16 @@ async function handler(req: NextRequest, ctx: Ctx): Promise<Response> {
     if (req.method === "POST") {
       const type = (req.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
       if (type !== "application/x-www-form-urlencoded") return errorResponse(415, "unsupported_media_type", "Send this form as application/x-www-form-urlencoded.");
-      const text = await readCapped(req);
+      const text = await readBodyText(req, MAX_FORM_BYTES);
       forward = new NextRequest(req.url, { method: "POST", headers: req.headers, body: text });
     }
     const res = await NextAuth(authOptions())(forward, ctx);
     if (res.status >= 500) {
-      console.error(`auth endpoint answered ${res.status} for ${req.method} ${action ?? ""}/${provider ?? ""}`);
+      log.error({ status: res.status, method: req.method, action, provider }, "auth endpoint answered a server error");
       return errorResponse(400, "bad_request", "This sign-in request is not supported.");
     }
     return action === "callback" ? await withSignInStatus(res) : res;
   } catch (e) {
-    if (e instanceof TooLarge) return errorResponse(413, "too_large", `The form is larger than ${MAX_FORM_BYTES / 1000} kB.`);
     return toErrorResponse(e);
   }
 }
