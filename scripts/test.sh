@@ -41,8 +41,8 @@ step "unit and integration tests (vitest)"
 # shellcheck disable=SC2086
 ./node_modules/.bin/vitest run ${BW_VITEST_ARGS:-}
 # The fault test kills PostgreSQL, so it runs alone, after the others, and only on a server this
-# run started (not on one another run, such as npm start, is using).
-if [ "${BW_FAULT_TEST:-}" = 1 ]; then
+# run started (not on one another run, such as npm start, is using). BW_FAULT_TEST=0 leaves it out.
+if [ "${BW_FAULT_TEST:-1}" = 1 ]; then
   step "fault test: PostgreSQL killed (SIGKILL) during saves, restarted by the supervisor"
   if [ "$BW_PG_OWNED" = 1 ]; then
     BW_FAULT_TEST=1 ./node_modules/.bin/vitest run tests/integration/fault-postgres.test.ts

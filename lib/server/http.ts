@@ -2,9 +2,11 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { NextResponse } from "next/server";
 import { ZodError, type z } from "zod";
+import { databaseUnavailable } from "./db-unavailable";
 import { AppError, type FieldErrors } from "./errors";
 import { MAX_JSON_DEPTH, parseGuardedJson } from "./json-guard";
 import { currentRequestId, log, logError, withRequestScope } from "./log";
+import { describeError } from "./log-safe";
 import { checkOrigin } from "./origin";
 import { isJsonContentType, readBodyText } from "./request-body";
 
@@ -24,10 +26,20 @@ export function errorResponse(status: number, code: string, message: string, fie
   return NextResponse.json({ error: { code, message, ...(fields ? { fields } : {}), ...(extra ?? {}), ...(requestId ? { requestId } : {}) } }, { status });
 }
 
+/** Seconds a client should wait before retrying while the database is away (the supervisor restarts it within about one). */
+const DATABASE_RETRY_SECONDS = 2;
+
 /** Maps anything thrown in a handler to the JSON error envelope; never leaks a stack trace or an internal message. */
 export function toErrorResponse(e: unknown) {
   if (e instanceof AppError) return errorResponse(e.status, e.code, e.message, e.fields, e.extra);
   if (e instanceof ZodError) return errorResponse(422, "invalid", "Some fields are not valid.", fieldErrors(e));
+  if (databaseUnavailable(e)) {
+    // A restart or crash of PostgreSQL: say "try again" (with when), not "something broke".
+    log.warn({ error: describeError(e) }, "database unavailable");
+    const res = errorResponse(503, "unavailable", "The database is not answering for a moment. Your work was not changed; try again in a few seconds.");
+    res.headers.set("retry-after", String(DATABASE_RETRY_SECONDS));
+    return res;
+  }
   logError("unhandled error in route handler", e);
   return errorResponse(500, "internal", "Something went wrong on our side. Your work was not changed; try again.");
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutBucketCorsCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, ListObjectsV2Command, PutBucketCorsCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { env } from "./env";
 import { logError } from "./log";
@@ -84,4 +84,14 @@ export async function writeObject(key: string, data: Buffer, contentType: string
 
 export async function deleteObject(key: string): Promise<void> {
   await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
+}
+
+/** Every object under `prefix` with its last change, a page of up to 1000 at a time. */
+export async function* listObjects(prefix: string): AsyncGenerator<{ key: string; modifiedAt: Date }> {
+  let token: string | undefined;
+  do {
+    const page = await s3().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token }));
+    for (const o of page.Contents ?? []) if (o.Key) yield { key: o.Key, modifiedAt: o.LastModified ?? new Date(0) };
+    token = page.IsTruncated ? page.NextContinuationToken : undefined;
+  } while (token);
 }

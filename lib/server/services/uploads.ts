@@ -9,6 +9,7 @@ import { invalid, notFound } from "../errors";
 import { accessPlan } from "../policy";
 import { deleteObject, objectSize, presignGet, presignPut, readObject, writeObject } from "../storage";
 import { mmPerPx } from "./photo-scale";
+import { INCOMING_PREFIX, uploadExpired } from "./upload-expiry";
 import { ACCEPTED_TYPES, MAX_UPLOAD_BYTES, reencode, sniffImageType } from "./image-check";
 
 /** Photos a plan may hold (each wall a few). */
@@ -78,7 +79,7 @@ export async function requestUpload(em: EntityManager, user: User, planId: strin
   const walls = (plan.document as unknown as PlanDocument).room?.walls ?? [];
   if (!walls.some((w) => w.id === input.wallId)) throw invalid("That wall is not in the plan.", { wallId: "Pick one of the plan's walls." });
   if ((await em.count(WallPhotoSchema, { plan: plan.id })) >= MAX_PHOTOS) throw invalid(`A plan can hold ${MAX_PHOTOS} photos; delete some first.`);
-  const uploadKey = `incoming/${plan.id}/${randomUUID()}`;
+  const uploadKey = `${INCOMING_PREFIX}${plan.id}/${randomUUID()}`;
   const photo = em.create(WallPhotoSchema, { plan, wallId: input.wallId, uploadedBy: user, uploadKey, status: "pending", bytes: input.bytes });
   await em.flush();
   const url = await presignPut(uploadKey, input.contentType);
@@ -100,6 +101,13 @@ export async function confirmUpload(em: EntityManager, user: User, planId: strin
   if (!p) throw notFound("That photo");
   if (p.status === "ready") return view(p);
   if (p.status === "rejected") throw invalid("This upload was refused; start a new one.");
+  if (uploadExpired(p.createdAt)) {
+    // Past the limit the scheduled clean-up would remove it anyway: do it now and say so.
+    await deleteObject(p.uploadKey).catch(() => undefined);
+    em.remove(p);
+    await em.flush();
+    throw invalid("This upload waited too long for its confirmation and was removed; start a new one.");
+  }
   let error: AppError | null = null;
   const size = await objectSize(p.uploadKey);
   if (size === null) throw invalid("Nothing was uploaded yet: PUT the file to the upload address first.", { file: "No file received." });

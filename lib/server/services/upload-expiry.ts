@@ -1,0 +1,54 @@
+import "server-only";
+import type { EntityManager } from "@mikro-orm/postgresql";
+import { z } from "zod";
+import { WallPhotoSchema } from "@/entities/WallPhoto";
+import { deleteObject, listObjects } from "../storage";
+
+/** Where raw uploads wait for their confirmation (see requestUpload). */
+export const INCOMING_PREFIX = "incoming/";
+
+/** Hours an unconfirmed upload (with whatever metadata it carries, GPS included) may wait. */
+const expiryHours = z.coerce.number().finite().min(0.01).max(24 * 365).default(24);
+
+/** How old an unconfirmed upload may get, in milliseconds (UPLOAD_EXPIRY_HOURS, default 24). */
+export function uploadMaxAgeMs(): number {
+  const parsed = expiryHours.safeParse(process.env.UPLOAD_EXPIRY_HOURS || undefined);
+  if (!parsed.success) throw new Error("UPLOAD_EXPIRY_HOURS must be a number of hours between 0.01 and 8760.");
+  return parsed.data * 3_600_000;
+}
+
+/** True when an upload started at `createdAt` is past the limit. */
+export const uploadExpired = (createdAt: Date, now = new Date()) => now.getTime() - createdAt.getTime() > uploadMaxAgeMs();
+
+const BATCH = 200;
+
+/**
+ * The scheduled clean-up: every upload never confirmed (or refused) and older than the limit loses
+ * its raw object and its row; then any object left in the incoming area past the limit (its row gone
+ * some other way) is deleted too. An object is deleted before its row, so a storage failure leaves
+ * the row for the next run rather than an object nobody tracks.
+ */
+export async function expireUploads(em: EntityManager, now = new Date()): Promise<{ rows: number; objects: number }> {
+  const cutoff = new Date(now.getTime() - uploadMaxAgeMs());
+  let rows = 0;
+  let objects = 0;
+  for (;;) {
+    const batch = await em.find(WallPhotoSchema, { status: { $in: ["pending", "rejected"] }, createdAt: { $lt: cutoff } }, { limit: BATCH, orderBy: { createdAt: "asc" } });
+    for (const p of batch) {
+      await deleteObject(p.uploadKey);
+      objects += 1;
+    }
+    em.remove(batch);
+    await em.flush();
+    rows += batch.length;
+    if (batch.length < BATCH) break;
+  }
+  for await (const o of listObjects(INCOMING_PREFIX)) {
+    // An object is written after its row, so one older than the limit belongs to an expired upload.
+    if (o.modifiedAt < cutoff) {
+      await deleteObject(o.key);
+      objects += 1;
+    }
+  }
+  return { rows, objects };
+}
