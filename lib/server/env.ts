@@ -42,6 +42,10 @@ const envSchema = z.object({
     .toLowerCase()
     .regex(/^(|true|false|[0-9]{1,2})$/, 'Use "true", "false" or the number of proxies in front of the app.')
     .optional(),
+  /** Hours an upload that was never confirmed (raw file, metadata and all) is kept before the clean-up removes it. */
+  UPLOAD_EXPIRY_HOURS: z.coerce.number().finite().min(0.01, "At least 0.01 hours.").max(8760, "At most a year (8760 hours).").default(24),
+  /** When the upload clean-up runs (cron, minute hour day month weekday); hourly by default. */
+  UPLOAD_CLEANUP_CRON: z.string().trim().regex(/^\S+( \S+){4}$/, "Five cron fields, e.g. 7 * * * *.").default("7 * * * *"),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -31,7 +31,7 @@ async function startOnce(): Promise<PgBoss> {
     await boss.start();
     // "stately": at most one clean-up queued and one running, however many instances tick.
     await boss.createQueue(QUEUES.uploadCleanup, { name: QUEUES.uploadCleanup, policy: "stately", retryLimit: 3, retryDelay: 60, expireInSeconds: 600 });
-    await boss.schedule(QUEUES.uploadCleanup, process.env.UPLOAD_CLEANUP_CRON || "7 * * * *");
+    await boss.schedule(QUEUES.uploadCleanup, env().UPLOAD_CLEANUP_CRON);
     await boss.work(QUEUES.uploadCleanup, { batchSize: 1 }, cleanUpUploads);
     return boss;
   } catch (e) {

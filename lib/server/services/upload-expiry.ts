@@ -1,21 +1,14 @@
 import "server-only";
 import type { EntityManager } from "@mikro-orm/postgresql";
-import { z } from "zod";
 import { WallPhotoSchema } from "@/entities/WallPhoto";
+import { env } from "../env";
 import { deleteObject, listObjects } from "../storage";
 
 /** Where raw uploads wait for their confirmation (see requestUpload). */
 export const INCOMING_PREFIX = "incoming/";
 
-/** Hours an unconfirmed upload (with whatever metadata it carries, GPS included) may wait. */
-const expiryHours = z.coerce.number().finite().min(0.01).max(24 * 365).default(24);
-
 /** How old an unconfirmed upload may get, in milliseconds (UPLOAD_EXPIRY_HOURS, default 24). */
-export function uploadMaxAgeMs(): number {
-  const parsed = expiryHours.safeParse(process.env.UPLOAD_EXPIRY_HOURS || undefined);
-  if (!parsed.success) throw new Error("UPLOAD_EXPIRY_HOURS must be a number of hours between 0.01 and 8760.");
-  return parsed.data * 3_600_000;
-}
+export const uploadMaxAgeMs = (): number => env().UPLOAD_EXPIRY_HOURS * 3_600_000;
 
 /** True when an upload started at `createdAt` is past the limit. */
 export const uploadExpired = (createdAt: Date, now = new Date()) => now.getTime() - createdAt.getTime() > uploadMaxAgeMs();
