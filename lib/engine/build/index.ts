@@ -1,0 +1,54 @@
+import type { Derived } from "../derive-types";
+import { derivePlan } from "../derive";
+import { cuttable } from "../nesting/pieces";
+import type { PlanDocument } from "../plan/schema";
+import { displayStepMm, formatLength } from "../units/format-length";
+import { cutSetups } from "./cut-setups";
+import { joinerySetups } from "./joinery";
+import { cutRows, fixtureLetters } from "./labels";
+import { buildSteps } from "./steps";
+import { buildStopTables, stopTracks, trackReaches } from "./stop-tables";
+import type { BuildResult } from "./types";
+
+export type { BuildResult, BuildStep, BuildStopRow, BuildStopTable, CutRow, FixtureLetter, Setup, SetupItem, SetupKind, Station, TimeNote } from "./types";
+export { compareLabels, fixtureLetter, fixtureLetters } from "./labels";
+export { readJoinery } from "./joinery";
+export { STATION_INFO } from "./setup-kinds";
+
+/**
+ * The day at the saw from a plan and its derived parts (mm): labelled cut list with twins merged, machine setups in
+ * run order (rips, crosscuts, joinery), each stop track's stop table and the build steps. Pure; problems come back
+ * as notes, never as exceptions.
+ */
+export function buildPlan(plan: PlanDocument, derived: Pick<Derived, "parts">): BuildResult {
+  const notes: string[] = [];
+  const letters = fixtureLetters(plan);
+  const mats = new Map(plan.materials.map((m) => [m.id, m]));
+  const fmt = (mm: number) => formatLength(mm, { units: plan.settings.units, precision: plan.settings.precision });
+  const { rows, labelOf } = cutRows(letters, derived.parts, plan.materials);
+  if (rows.length === 0) notes.push(plan.fixtures.length === 0 ? "The plan has no fixtures yet, so there is nothing to cut: add a cabinet or a shelf." : "The plan's fixtures have no parts to cut.");
+  for (const r of rows) {
+    const mat = mats.get(r.materialId);
+    if (!cuttable(r)) notes.push(`${r.label} ${r.name}: a size is zero or not a number, so it is left out of the setups; check the fixture's sizes.`);
+    else if (!mat) notes.push(`${r.label} ${r.name}: material "${r.materialId}" is not in the plan's materials; add it so the part can be bought and cut.`);
+    else if (r.thicknessMm < mat.thicknessMm - 0.5) notes.push(`${r.label} ${r.name} is ${fmt(r.thicknessMm)} thick, thinner than its stock (${mat.name}, ${fmt(mat.thicknessMm)}): rip or plane it to thickness after cutting.`);
+  }
+  const tracks = stopTracks(plan, letters, notes);
+  const setups = [...cutSetups(rows, mats, trackReaches(tracks, plan.settings.kerfMm), fmt, displayStepMm(plan.settings)), ...joinerySetups(rows, fmt)];
+  setups.forEach((s, i) => (s.order = i + 1));
+  const stopTables = buildStopTables(plan, tracks, setups);
+  for (const t of stopTables) for (const n of t.notes) if (n.startsWith("No saw")) notes.push(`Stop track ${t.letter} (${t.name}): ${n}`);
+  const steps = buildSteps(letters, derived.parts, rows, labelOf, setups);
+  return { kerfMm: plan.settings.kerfMm, fixtures: letters, rows, setups, stopTables, steps, notes, labelOf: Object.fromEntries(labelOf) };
+}
+
+/** buildPlan after deriving the plan; a plan whose room cannot be derived gives an empty result with a note. */
+export function buildFromPlan(plan: PlanDocument): BuildResult {
+  let parts: Derived["parts"];
+  try {
+    parts = derivePlan(plan).parts;
+  } catch {
+    return { kerfMm: plan.settings.kerfMm, fixtures: fixtureLetters(plan), rows: [], setups: [], stopTables: [], steps: [], notes: ["The plan could not be worked out (check the room's measurements), so there is nothing to cut yet."], labelOf: {} };
+  }
+  return buildPlan(plan, { parts });
+}
