@@ -34,7 +34,7 @@ const API_POLICY = "default-src 'none'; style-src 'unsafe-inline'; img-src 'self
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   distDir: process.env.BW_DIST_DIR ?? ".next",
-  serverExternalPackages: ["@mikro-orm/postgresql", "@mikro-orm/migrations", "@mikro-orm/core", "sharp", "pdfkit", "piscina", "pino", "pg-boss", "@react-pdf/renderer"],
+  serverExternalPackages: ["@mikro-orm/postgresql", "@mikro-orm/migrations", "@mikro-orm/core", "sharp", "piscina", "pino", "pg-boss", "@react-pdf/renderer"],
   poweredByHeader: false,
   // `npm test` runs tsc over the whole project first; the build need not type-check a second time.
   typescript: { ignoreBuildErrors: true },

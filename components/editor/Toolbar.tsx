@@ -43,7 +43,7 @@ function GridStep() {
       data-testid="grid-step"
       className="rounded px-1.5 py-1 text-xs tabular-nums text-walnut-700 hover:bg-walnut-100 focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-amberline-500 aria-pressed:bg-walnut-100"
       aria-pressed={size === "fine"}
-      aria-label={`Grid step ${step}, Shift ${big}${snapping ? "" : " (snapping off)"}. Fine grid on/off`}
+      aria-label={`Grid ${step}${snapping ? "" : " (snapping off)"}: fine grid on/off; Shift snaps to ${big}`}
       title={`Grid step ${step} (Shift: ${big}). Fine grid on/off (Shift+G)`}
       onClick={() => run(ed, "toggle-fine-grid")}
     >

@@ -1,7 +1,6 @@
 import { test, expect, type Page } from "@playwright/test";
 import { randomUUID } from "node:crypto";
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
+import { wcagViolations } from "./axe";
 import { signIn } from "./steps";
 
 test.setTimeout(180_000);
@@ -20,17 +19,6 @@ const DOCUMENT = {
   ],
 };
 const ON_BACK_WALL = ["Drawer run", "Saw station", "Base cabinet", "Glue shelf"];
-
-/** WCAG 2.1 A and AA violations on the page, by axe-core (the engine @axe-core/playwright runs), as "rule: targets". */
-async function wcagViolations(page: Page): Promise<string[]> {
-  const source = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
-  await page.evaluate(source);
-  const result = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, o: object) => Promise<{ violations: { id: string; nodes: { target: string[] }[] }[] }> } }).axe;
-    return axe.run(document, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"] } });
-  });
-  return result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-}
 
 /** Pixels of the 3D canvas in the fixtures' wood colours (warm: red over green over blue, well apart), and the total. */
 async function woodPixels(page: Page): Promise<{ wood: number; total: number }> {
