@@ -18,6 +18,21 @@ const config = [
     },
   },
   {
+    // One fact, one place: unit conversion and geometry live in lib/engine; views draw what it computes.
+    files: ["components/**/*.{ts,tsx}", "scene/**/*.{ts,tsx}", "app/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        { selector: "ExportAllDeclaration", message: "Use named exports, not export *." },
+        { selector: "Literal[value=25.4], Literal[value=304.8], Literal[value=0.03937007874015748]", message: "Convert lengths with lib/engine/units (parseLength, formatLength, mmToIn), not a conversion factor here." },
+        {
+          selector: "CallExpression[callee.object.name='Math'][callee.property.name=/^(sin|cos|tan|atan2|asin|acos)$/]",
+          message: "Geometry belongs in lib/engine (room/wall-frame.ts, drawings/): a view that computes its own copy disagrees with the others.",
+        },
+      ],
+    },
+  },
+  {
     // Tests read untyped JSON bodies.
     files: ["tests/**/*.ts"],
     rules: { "@typescript-eslint/no-explicit-any": "off" },
