@@ -24,7 +24,7 @@ const config = [
       "no-restricted-syntax": [
         "error",
         { selector: "ExportAllDeclaration", message: "Use named exports, not export *." },
-        { selector: "Literal[value=25.4], Literal[value=304.8], Literal[value=0.03937007874015748]", message: "Convert lengths with lib/engine/units (parseLength, formatLength, mmToIn), not a conversion factor here." },
+        { selector: "Literal[value=25.4], Literal[value=304.8], Literal[value=0.03937007874015748]", message: "Convert lengths with lib/engine/units (parseLength, formatLength, inches, toInches), not a conversion factor here." },
         {
           selector: "CallExpression[callee.object.name='Math'][callee.property.name=/^(sin|cos|tan|atan2|asin|acos)$/]",
           message: "Geometry belongs in lib/engine (room/wall-frame.ts, drawings/): a view that computes its own copy disagrees with the others.",
