@@ -4,6 +4,7 @@ import { counterSpan, neighbourCounterHeight } from "./fixtures/place/neighbours
 import { placeObstacles } from "./fixtures/place/obstacles";
 import type { FixtureResult } from "./fixtures/place/place-fixture";
 import { placeResolved, resolveFixture } from "./fixtures/place/place-fixture";
+import { FOLLOWER_KINDS, placeTracks } from "./fixtures/place/tracks";
 import { COUNTER_KINDS } from "./fixtures/registry";
 import type { FixtureContext } from "./fixtures/types";
 import { PLAN_LIMITS } from "./plan/limits";
@@ -35,11 +36,16 @@ function placeAll(plan: PlanDocument, room: SolvedRoom, notes: string[]): Fixtur
   const results = new Map<string, FixtureResult>();
   const later: { doc: FixtureDoc; r: Extract<ReturnType<typeof resolveFixture>, { ok: true }> }[] = [];
   const counters: CounterSpan[] = [];
+  const tracks: FixtureDoc[] = [];
   // Pass 1: everything that does not depend on its neighbours (counters among them).
   for (const doc of plan.fixtures) {
     const r = resolveFixture(doc);
     if (!r.ok) {
       notes.push(r.note);
+      continue;
+    }
+    if (FOLLOWER_KINDS.has(doc.kind)) {
+      tracks.push(doc);
       continue;
     }
     if (NEEDS_NEIGHBOURS.has(doc.kind)) {
@@ -67,6 +73,13 @@ function placeAll(plan: PlanDocument, room: SolvedRoom, notes: string[]): Fixtur
     const h = neighbourCounterHeight(doc, probe.placed, counters);
     const ctx = h === undefined ? base : { ...base, neighbourCounterHeightMm: h - frame.z0 };
     results.set(doc.id, h === undefined ? probe : placeResolved(doc, r.kind, r.params, frame, ctx));
+  }
+  // Pass 3: stop tracks follow their saws (and the counters beside them).
+  const placedTracks = placeTracks(tracks, plan.fixtures, room, results, base);
+  for (const doc of tracks) {
+    const res = placedTracks.get(doc.id);
+    if (res) results.set(doc.id, res);
+    else notes.push(`Fixture ${doc.id}: wall not found, skipped.`);
   }
   // Keep the plan's order.
   return plan.fixtures.map((d) => results.get(d.id)).filter((x): x is FixtureResult => !!x);
@@ -127,7 +140,10 @@ export function rederiveFixtures(plan: PlanDocument, previous: Derived, changedI
   const results = new Map<string, FixtureResult>();
   const counters: CounterSpan[] = [];
   const shelves: FixtureDoc[] = [];
+  // Stop tracks are always placed again: cheap, and they follow their saw and its counters.
+  const tracks = plan.fixtures.filter((d) => FOLLOWER_KINDS.has(d.kind));
   for (const doc of plan.fixtures) {
+    if (FOLLOWER_KINDS.has(doc.kind)) continue;
     if (NEEDS_NEIGHBOURS.has(doc.kind) && redo(doc)) {
       shelves.push(doc);
       continue;
@@ -153,6 +169,7 @@ export function rederiveFixtures(plan: PlanDocument, previous: Derived, changedI
     const h = neighbourCounterHeight(doc, probe.placed, counters);
     results.set(doc.id, h === undefined ? probe : placeResolved(doc, r.kind, r.params, frame, { ...base, neighbourCounterHeightMm: h - frame.z0 }));
   }
+  for (const [id, res] of placeTracks(tracks, plan.fixtures, room, results, base)) results.set(id, res);
   const list = plan.fixtures.map((d) => results.get(d.id)).filter((x): x is FixtureResult => !!x);
   const fixtures = list.map((r) => r.placed);
   return {

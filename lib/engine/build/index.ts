@@ -20,7 +20,7 @@ export { STATION_INFO } from "./setup-kinds";
  * run order (rips, crosscuts, joinery), each stop track's stop table and the build steps. Pure; problems come back
  * as notes, never as exceptions.
  */
-export function buildPlan(plan: PlanDocument, derived: Pick<Derived, "parts">): BuildResult {
+export function buildPlan(plan: PlanDocument, derived: Pick<Derived, "parts"> & Partial<Pick<Derived, "fixtures">>): BuildResult {
   const notes: string[] = [];
   const letters = fixtureLetters(plan);
   const mats = new Map(plan.materials.map((m) => [m.id, m]));
@@ -33,7 +33,7 @@ export function buildPlan(plan: PlanDocument, derived: Pick<Derived, "parts">): 
     else if (!mat) notes.push(`${r.label} ${r.name}: material "${r.materialId}" is not in the plan's materials; add it so the part can be bought and cut.`);
     else if (r.thicknessMm < mat.thicknessMm - 0.5) notes.push(`${r.label} ${r.name} is ${fmt(r.thicknessMm)} thick, thinner than its stock (${mat.name}, ${fmt(mat.thicknessMm)}): rip or plane it to thickness after cutting.`);
   }
-  const tracks = stopTracks(plan, letters, notes);
+  const tracks = stopTracks(plan, letters, notes, derived.fixtures);
   const setups = [...cutSetups(rows, mats, trackReaches(tracks, plan.settings.kerfMm), fmt, displayStepMm(plan.settings)), ...joinerySetups(rows, fmt)];
   setups.forEach((s, i) => (s.order = i + 1));
   const stopTables = buildStopTables(plan, tracks, setups);
@@ -44,11 +44,11 @@ export function buildPlan(plan: PlanDocument, derived: Pick<Derived, "parts">): 
 
 /** buildPlan after deriving the plan; a plan whose room cannot be derived gives an empty result with a note. */
 export function buildFromPlan(plan: PlanDocument): BuildResult {
-  let parts: Derived["parts"];
+  let derived: Derived;
   try {
-    parts = derivePlan(plan).parts;
+    derived = derivePlan(plan);
   } catch {
     return { kerfMm: plan.settings.kerfMm, fixtures: fixtureLetters(plan), rows: [], setups: [], stopTables: [], steps: [], notes: ["The plan could not be worked out (check the room's measurements), so there is nothing to cut yet."], labelOf: {} };
   }
-  return buildPlan(plan, { parts });
+  return buildPlan(plan, derived);
 }

@@ -1,6 +1,7 @@
 import type { StopTrackParams } from "../fixtures/stop-track/params";
 import { stopTrackParamsSchema } from "../fixtures/stop-track/params";
-import { stopTable } from "../fixtures/stop-track/stop-table";
+import { stopTable, trackStartMm } from "../fixtures/stop-track/stop-table";
+import type { PlacedFixture } from "../fixtures/types";
 import type { PlanDocument } from "../plan/schema";
 import type { TrackReach } from "./cut-setups";
 import type { BuildStopRow, BuildStopTable, FixtureLetter, Setup } from "./types";
@@ -13,17 +14,20 @@ export interface TrackDoc {
   letter: string;
   name: string;
   params: StopTrackParams;
+  /** The track's near end from the blade, mm: derived from its saw when attached, else typed. */
+  startMm: number;
 }
 
 /** The plan's stop tracks with parsed parameters; tracks whose parameters do not parse get a note and are left out. */
-export function stopTracks(plan: PlanDocument, letters: readonly FixtureLetter[], notes: string[]): TrackDoc[] {
+export function stopTracks(plan: PlanDocument, letters: readonly FixtureLetter[], notes: string[], placed: readonly PlacedFixture[] = []): TrackDoc[] {
   const out: TrackDoc[] = [];
+  const byId = new Map(placed.map((p) => [p.id, p]));
   plan.fixtures.forEach((f, i) => {
     if (f.kind !== "stop-track") return;
     const r = stopTrackParamsSchema.safeParse(f.params);
     const l = letters[i];
     if (!r.success) notes.push(`Stop track ${l.letter} (${l.name}): its settings could not be read, so it has no stop table.`);
-    else out.push({ fixtureId: f.id, letter: l.letter, name: l.name, params: r.data });
+    else out.push({ fixtureId: f.id, letter: l.letter, name: l.name, params: r.data, startMm: trackStartMm(r.data, byId.get(f.id)) });
   });
   return out;
 }
@@ -31,7 +35,7 @@ export function stopTracks(plan: PlanDocument, letters: readonly FixtureLetter[]
 /** How far each track reaches for cut lengths, mm. */
 export function trackReaches(tracks: readonly TrackDoc[], kerfMm: number): TrackReach[] {
   return tracks.map((t) => {
-    const s = stopTable({ ...t.params, cutLengthsMm: [] }, { kerfMm } as Parameters<typeof stopTable>[1]);
+    const s = stopTable({ ...t.params, cutLengthsMm: [] }, { kerfMm } as Parameters<typeof stopTable>[1], t.startMm);
     return { fixtureId: t.fixtureId, minCutMm: s.minCutMm, maxCutMm: s.maxCutMm };
   });
 }
@@ -47,7 +51,7 @@ export function buildStopTables(plan: PlanDocument, tracks: readonly TrackDoc[],
     const mine = setups.filter((s) => s.stopTrackId === t.fixtureId && s.setting.lengthMm !== undefined);
     const planLengths = mine.map((s) => s.setting.lengthMm as number);
     const typed = t.params.cutLengthsMm.filter((L) => !planLengths.some((p) => Math.abs(p - L) < 0.05));
-    const table = stopTable({ ...t.params, cutLengthsMm: [...planLengths, ...typed] }, plan.settings);
+    const table = stopTable({ ...t.params, cutLengthsMm: [...planLengths, ...typed] }, plan.settings, t.startMm);
     const rows = table.rows.map((r, i): BuildStopRow => {
       const s = i < mine.length ? mine[i] : undefined;
       return {

@@ -1,6 +1,6 @@
 import type { Vec2 } from "../geometry/types";
 import type { PlanDocument, PlanDocumentInput } from "../plan/schema";
-import { planDocumentSchema } from "../plan/schema";
+import { PLAN_SCHEMA_VERSION, planDocumentSchema } from "../plan/schema";
 import type { SolvedRoom } from "../room/types";
 import { roomZones } from "../zones";
 import { DEFAULT_RULE_NUMBERS as N } from "./numbers";
@@ -62,7 +62,7 @@ function sampleRoom(): SolvedRoom {
 
 function samplePlan(room: Partial<PlanDocumentInput["room"]>): PlanDocument {
   return planDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: PLAN_SCHEMA_VERSION,
     room: { walls: ["w1", "w2", "w3", "w4"].map((id) => ({ id, lengthMm: 6000 })), ...room },
   });
 }

@@ -157,10 +157,17 @@ function sameShape(a: PlacedFixture, b: PlacedFixture): boolean {
   return (
     a.workSurfaceMm === b.workSurfaceMm &&
     a.label === b.label &&
+    sameTrack(a.track, b.track) &&
     samePrism(a.body, b.body) &&
     a.zones.length === b.zones.length &&
     a.zones.every((z, i) => z.id === b.zones[i].id && samePrism(z.prism, b.zones[i].prism))
   );
+}
+
+/** Same stop-track mount (both undefined for other kinds). */
+function sameTrack(a: PlacedFixture["track"], b: PlacedFixture["track"]): boolean {
+  if (!a || !b) return a === b;
+  return a.sawId === b.sawId && a.attached === b.attached && a.side === b.side && a.startFromBladeMm === b.startFromBladeMm && a.tableMm === b.tableMm && a.counterTopMm === b.counterTopMm && a.counterRunMm === b.counterRunMm;
 }
 
 function unionAll(f: PlacedFixture): Bounds2 {

@@ -15,6 +15,9 @@ import { shelfSagRule } from "./rules/shelf-sag";
 import { solventFumesRule } from "./rules/solvent-fumes";
 import { stockPathRule } from "./rules/stock-path";
 import { stopReachRule } from "./rules/stop-reach";
+import { stopTrackAttachedRule } from "./rules/stop-track-attached";
+import { stopTrackHeightRule } from "./rules/stop-track-height";
+import { stopTrackRunRule } from "./rules/stop-track-run";
 import { sawInfeedOutfeedRule } from "./rules/table-saw-clearance";
 import { tableFlushRule } from "./rules/tool-table-flush";
 import { walkwayRule } from "./rules/walkway";
@@ -38,6 +41,9 @@ export const RULES: readonly Rule<CheckContext>[] = [
   reachRule,
   shelfSagRule,
   stopReachRule,
+  stopTrackAttachedRule,
+  stopTrackHeightRule,
+  stopTrackRunRule,
   anchorFixturesRule,
   sawGuardingRule,
   dustRule,

@@ -4,7 +4,7 @@ import { boundText, countRange, mmRange, numberRange, planText } from "./bounded
 import { PLAN_LIMITS } from "./limits";
 
 /**
- * The plan document, version 1. One schema: the database stores it, the API accepts it, export
+ * The plan document, version 2. One schema: the database stores it, the API accepts it, export
  * and import use it. All lengths are millimetres; angles are degrees. Every number has a physical
  * minimum and maximum with its reason (helpers in ./bounded), and every list a cap (./limits).
  */
@@ -80,6 +80,7 @@ export const openingSchema = z.discriminatedUnion("kind", [
     kind: z.literal("entry-door"),
     ...onWall(inch(18), inch(96), "door a person walks through"),
     heightMm: mmRange(inch(48), inch(120), { min: "lower than a door a person walks through", max: "taller than any entry door" }).default(2032),
+    /** Hinge jamb, as seen from inside the room facing the door. */
     hinge: z.enum(["left", "right"]).default("left"),
     swing: z.enum(["in", "out"]).default("in"),
   }),
@@ -215,7 +216,7 @@ export const fixtureSchema = z.object({
 });
 export type FixtureDoc = z.infer<typeof fixtureSchema>;
 
-export const PLAN_SCHEMA_VERSION = 1 as const;
+export const PLAN_SCHEMA_VERSION = 2 as const;
 
 export const planDocumentSchema = z.object({
   schemaVersion: z.literal(PLAN_SCHEMA_VERSION).meta({ description: "Format version; older files are upgraded on import." }),

@@ -1,5 +1,6 @@
 import { MM_PER_INCH } from "../units/length";
 import { PLAN_SCHEMA_VERSION, planDocumentSchema } from "./schema";
+import { upgradeSides1to2 } from "./upgrade-sides";
 import type { PlanDocument } from "./schema";
 
 /** Why a document could not be brought to the current version. Route handlers map it to 422. */
@@ -64,6 +65,7 @@ function upgrade0to1(doc: Raw): Raw {
 /** Every known step, keyed by the version it upgrades from. Add a step here whenever the schema version goes up. */
 export const UPGRADE_STEPS: Readonly<Record<number, UpgradeStep>> = Object.freeze({
   0: { from: 0, describe: "Inches to millimetres; walls get ids; fixtures placed by wall id.", up: upgrade0to1 },
+  1: { from: 1, describe: "Left and right as seen facing the wall (door hinges, stop-track sides, blade offsets flipped); stop tracks attached to the nearest saw on their wall.", up: upgradeSides1to2 },
 });
 
 /**

@@ -18,9 +18,10 @@ export function openingZones(op: Opening, f: Frame, ceilingMm: number): WorldZon
     if (op.swing === "out") {
       return [{ id: `${op.id}:doorway`, ownerId: op.id, purpose: "doorway", label: "Doorway", prism: rectPrism(f, 0, 0, op.widthMm, DOORWAY_DEPTH_MM, 0, op.heightMm) }];
     }
-    // Quarter circle of radius = door width, centred on the hinge jamb.
-    const hx = op.hinge === "left" ? 0 : op.widthMm;
-    const toward = op.hinge === "left" ? 1 : -1;
+    // Quarter circle of radius = door width, centred on the hinge jamb. The hinge side is as seen from inside
+    // the room facing the door: the wall's local +x (toward its end corner) is that person's left.
+    const hx = op.hinge === "left" ? op.widthMm : 0;
+    const toward = op.hinge === "left" ? -1 : 1;
     const pts = [toWorld(f, hx, 0)];
     for (let i = 0; i <= SWING_SEGMENTS; i++) {
       const a = (i / SWING_SEGMENTS) * (Math.PI / 2);

@@ -2,7 +2,7 @@
 import type { Derived, PlacedObstacle } from "@/lib/engine/derive-types";
 import type { LocalBox } from "@/lib/engine/geometry/types";
 import type { Part, PlacedFixture, WorldZone } from "@/lib/engine/fixtures/types";
-import { planDocumentSchema, type PlanDocument, type PlanDocumentInput } from "@/lib/engine/plan/schema";
+import { PLAN_SCHEMA_VERSION, planDocumentSchema, type PlanDocument, type PlanDocumentInput } from "@/lib/engine/plan/schema";
 import type { SolvedRoom } from "@/lib/engine/room/types";
 import { mm } from "@/lib/engine/units/length";
 import { roomZones } from "@/lib/engine/zones";
@@ -37,7 +37,7 @@ type RoomInput = PlanDocumentInput["room"];
 /** A valid plan for a W x D room (defaults filled by the schema). */
 export function makePlan(W: number, D: number, over: { room?: Partial<RoomInput>; settings?: PlanDocumentInput["settings"]; fixtures?: PlanDocumentInput["fixtures"]; materials?: PlanDocumentInput["materials"] } = {}): PlanDocument {
   return planDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: PLAN_SCHEMA_VERSION,
     settings: over.settings ?? {},
     room: {
       walls: [

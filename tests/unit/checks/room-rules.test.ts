@@ -54,7 +54,7 @@ describe("doors, overhead door and windows clear (practice)", () => {
   });
   const find = (fx: ReturnType<typeof fixture>[], zone: string) => evaluatePlan(plan, derive(plan, room, fx)).filter((f) => f.ruleId === "openings-clear" && f.zoneIds.includes(zone));
   it("a cabinet beside the swing passes; one reaching 10 mm into it fails", () => {
-    // Door from x = 1000 to 1900, hinge left: the swing reaches x = 1900 along the wall.
+    // Door from x = 1000 to 1900, hinged on the left as seen from inside the room (x = 1900 on wall w1): the swing reaches x = 1900.
     expect(find([counter("c", 1900, 600)], "d:swing")[0].pass).toBe(true);
     const f = find([counter("c", 1890, 600)], "d:swing")[0];
     expect(f.pass).toBe(false);

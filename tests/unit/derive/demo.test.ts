@@ -3,7 +3,7 @@ import { demoPlan } from "@/lib/engine/demo/demo-plan";
 import { generatePlan } from "@/lib/engine/demo/generate-plan";
 import { deriveWithNotes } from "@/lib/engine/derive";
 import { stopTrackParamsSchema } from "@/lib/engine/fixtures/stop-track/params";
-import { stopTable } from "@/lib/engine/fixtures/stop-track/stop-table";
+import { stopTable, trackStartMm } from "@/lib/engine/fixtures/stop-track/stop-table";
 import { pointInPolygon } from "@/lib/engine/geometry/polygon";
 import { parsePlan } from "@/lib/engine/plan/parse";
 
@@ -34,7 +34,11 @@ describe("demoPlan", () => {
       for (const p of z.prism.polygon) expect(pointInPolygon(p, derived.room.corners, 1)).toBe(true);
     }
     const doc = plan.fixtures.find((f) => f.kind === "stop-track")!;
-    const t = stopTable(stopTrackParamsSchema.parse(doc.params), plan.settings);
+    const placed = derived.fixtures.find((f) => f.id === doc.id)!;
+    // The track belongs to the saw: the engine places it and works out its start from the blade.
+    expect(placed.track?.attached).toBe(true);
+    const params = stopTrackParamsSchema.parse(doc.params);
+    const t = stopTable(params, plan.settings, trackStartMm(params, placed));
     expect(t.rows.length).toBeGreaterThan(0);
     expect(t.rows.every((r) => r.inReach)).toBe(true);
   });

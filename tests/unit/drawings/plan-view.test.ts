@@ -5,7 +5,7 @@ import { derivePlan } from "@/lib/engine/derive";
 import { planDrawings, planDrawingsOrNull } from "@/lib/engine/drawings/plan-drawings";
 import { planView } from "@/lib/engine/drawings/plan-view";
 import { FIXTURE_KIND_NAMES } from "@/lib/engine/fixtures/registry";
-import { planDocumentSchema } from "@/lib/engine/plan/schema";
+import { PLAN_SCHEMA_VERSION, planDocumentSchema } from "@/lib/engine/plan/schema";
 import { formatLength } from "@/lib/engine/units/format-length";
 import { namings } from "./helpers";
 
@@ -102,6 +102,6 @@ describe("plan drawings", () => {
     // A stored document the schema would refuse (a wall of 0 mm) must not break the page.
     const bad = { ...plan, room: { ...plan.room, walls: plan.room.walls.map((w, i) => (i === 0 ? { ...w, lengthMm: 0 } : w)) } };
     expect(planDrawingsOrNull(bad)).toBeNull();
-    expect(planDrawingsOrNull(planDocumentSchema.parse({ schemaVersion: 1, room: { walls: [{ id: "a", lengthMm: 1000 }, { id: "b", lengthMm: 1000 }, { id: "c", lengthMm: 1000 }] } }))).not.toBeNull();
+    expect(planDrawingsOrNull(planDocumentSchema.parse({ schemaVersion: PLAN_SCHEMA_VERSION, room: { walls: [{ id: "a", lengthMm: 1000 }, { id: "b", lengthMm: 1000 }, { id: "c", lengthMm: 1000 }] } }))).not.toBeNull();
   });
 });

@@ -4,7 +4,7 @@ import { derivePlan } from "@/lib/engine/derive";
 import { wallElevation } from "@/lib/engine/drawings/wall-elevation";
 import { textWidthMm, LINE_PITCH_EM } from "@/lib/engine/drawings/text-fit";
 import { FIXTURE_KIND_NAMES } from "@/lib/engine/fixtures/registry";
-import { planDocumentSchema } from "@/lib/engine/plan/schema";
+import { PLAN_SCHEMA_VERSION, planDocumentSchema } from "@/lib/engine/plan/schema";
 import { formatLength } from "@/lib/engine/units/format-length";
 import { boxOf, namings } from "./helpers";
 
@@ -109,7 +109,7 @@ describe("wall elevation of the demo's back wall", () => {
 
   it("is laid out from the solved wall length, not the measured one", () => {
     // Four walls that do not close square: solving spreads the gap, so solved and measured lengths differ.
-    const p = planDocumentSchema.parse({ schemaVersion: 1, room: { walls: [{ id: "a", lengthMm: 5000 }, { id: "b", lengthMm: 4000 }, { id: "c", lengthMm: 5100 }, { id: "e", lengthMm: 4000 }] }, fixtures: [] });
+    const p = planDocumentSchema.parse({ schemaVersion: PLAN_SCHEMA_VERSION, room: { walls: [{ id: "a", lengthMm: 5000 }, { id: "b", lengthMm: 4000 }, { id: "c", lengthMm: 5100 }, { id: "e", lengthMm: 4000 }] }, fixtures: [] });
     const dd = derivePlan(p);
     const w = dd.room.walls.find((x) => x.id === "c")!;
     expect(Math.abs(w.solvedLengthMm! - w.lengthMm)).toBeGreaterThan(10);

@@ -1,6 +1,6 @@
 import type { Derived } from "@/lib/engine/derive-types";
 import type { PlacedFixture } from "@/lib/engine/fixtures/types";
-import type { PlanDocument } from "@/lib/engine/plan/schema";
+import { PLAN_SCHEMA_VERSION, type PlanDocument } from "@/lib/engine/plan/schema";
 import type { SolvedWall } from "@/lib/engine/room/types";
 import type { EnginePort } from "@/lib/client/engine-port";
 import { Editor } from "@/lib/client/editor";
@@ -53,7 +53,7 @@ export const stubEngine: EnginePort = {
 /** A 4 m x 3 m room, walls w1..w4. */
 export function roomDoc(): PlanDocument {
   return {
-    schemaVersion: 1,
+    schemaVersion: PLAN_SCHEMA_VERSION,
     settings: { units: "mm", precision: 16, kerfMm: 3.175, longestStockMm: 2438.4, userHeightMm: 1755, flushToleranceMm: 0.79375, defaultSheetMaterialId: "ply-18", presetId: null },
     room: {
       walls: [

@@ -16,12 +16,12 @@ describe("upgradePlan", () => {
     for (let v = 0; v < PLAN_SCHEMA_VERSION; v++) expect(UPGRADE_STEPS[v]?.from).toBe(v);
   });
 
-  it("brings version 0 to version 1, inches to mm (1 in = 25.4 mm, NIST SP 811 App. B)", () => {
+  it("brings version 0 to the current version, inches to mm (1 in = 25.4 mm, NIST SP 811 App. B)", () => {
     const input = v0();
     const before = JSON.stringify(input);
     const doc = readPlanDocument(input);
     expect(JSON.stringify(input)).toBe(before); // input untouched
-    expect(doc.schemaVersion).toBe(1);
+    expect(doc.schemaVersion).toBe(PLAN_SCHEMA_VERSION);
     // 240 in = 6096 mm; 264 in = 6705.6 mm; 108 in = 2743.2 mm; 24 in = 609.6 mm.
     expect(doc.room.walls.map((w) => w.lengthMm)).toEqual([6096, 6705.6, 6096, 6705.6]);
     expect(doc.room.walls.map((w) => w.id)).toEqual(["w1", "w2", "w3", "w4"]);
@@ -47,8 +47,9 @@ describe("upgradePlan", () => {
       }
       throw new Error("expected a PlanVersionError");
     };
-    expect(err({ schemaVersion: 2, room: {} }).code).toBe("newer-version");
-    expect(err({ schemaVersion: 2, room: {} }).message).toMatch(/newer version.*version 2.*up to version 1/);
+    const next = PLAN_SCHEMA_VERSION + 1;
+    expect(err({ schemaVersion: next, room: {} }).code).toBe("newer-version");
+    expect(err({ schemaVersion: next, room: {} }).message).toMatch(new RegExp(`newer version.*version ${next}.*up to version ${PLAN_SCHEMA_VERSION}`));
     expect(err({ schemaVersion: -1 }).code).toBe("unknown-version");
     expect(err({ schemaVersion: 1.5 }).code).toBe("unknown-version");
     expect(err({ schemaVersion: "1" }).code).toBe("unknown-version");

@@ -27,7 +27,8 @@ function sideStrip(f: PlacedFixture, side: "left" | "right", lengthMm: number): 
   const sn = Math.sin(f.rotation);
   const local = { x: f.footprint.widthMm / 2, y: f.footprint.depthMm / 2 };
   const origin: Vec2 = { x: f.origin.x + c * local.x - sn * local.y, y: f.origin.y + sn * local.x + c * local.y };
-  const dir = side === "left" ? { x: -c, y: -sn } : { x: c, y: sn };
+  // Local +x is the left of the person facing the saw (and the wall behind it).
+  const dir = side === "left" ? { x: c, y: sn } : { x: -c, y: -sn };
   return { strip: makeStrip(origin, dir, FALLBACK_STOCK_WIDTH_MM, lengthMm) };
 }
 

@@ -1,5 +1,5 @@
 import { stopTrackParamsSchema } from "../../fixtures/stop-track/params";
-import { stopTable } from "../../fixtures/stop-track/stop-table";
+import { stopTable, trackStartMm } from "../../fixtures/stop-track/stop-table";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { KIND } from "../kinds";
@@ -16,7 +16,8 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     const parsed = stopTrackParamsSchema.safeParse(docs.get(f.id)?.params ?? {});
     if (!parsed.success) continue;
     // The kerf in force (a preset may set it) decides where the kerf edge falls on the track side.
-    const table = stopTable(parsed.data, { ...ctx.plan.settings, kerfMm: ctx.numbers.kerfMm });
+    // The start is the derived one when the track sits on a saw (derive works it out from the saw's blade).
+    const table = stopTable(parsed.data, { ...ctx.plan.settings, kerfMm: ctx.numbers.kerfMm }, trackStartMm(parsed.data, f));
     for (const row of table.rows) {
       const cut = row.cutLengthMm;
       const over = cut > table.maxCutMm ? cut - table.maxCutMm : 0;
