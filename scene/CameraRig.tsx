@@ -16,6 +16,7 @@ export function CameraRig() {
   const view = useUi((s) => s.view);
   const wallId = useUi((s) => s.elevationWallId);
   const frameN = useUi((s) => s.frameRequest.n);
+  const dims = useUi((s) => s.showDimensions);
   const camera = useThree((s) => s.camera);
   const controls = useThree((s) => s.controls) as OrbitControlsImpl | null;
   const size = useThree((s) => s.size);
@@ -25,8 +26,8 @@ export function CameraRig() {
     const d = ed.derived.getState().derived;
     if (!d || !controls) return;
     const bodies = ed.ui.getState().frameRequest.ids.map((id) => ed.placed(id)).filter((f) => !!f);
-    if (fitCamera(camera, controls, d, view, wallId, bodies, size)) invalidate();
-  }, [ed, view, wallId, frameN, camera, controls, size, invalidate]);
+    if (fitCamera(camera, controls, d, view, wallId, bodies, size, dims)) invalidate();
+  }, [ed, view, wallId, frameN, camera, controls, size, invalidate, dims]);
 
   return (
     <>

@@ -33,26 +33,21 @@ const Dim = memo(function Dim({ wall, from, to, off, text, testId }: { wall: Sol
   );
 });
 
-/** Plan and elevation dimensions: every wall's length outside the room; the selected wall fixture's distances to the wall ends. */
+/** The selected wall fixture's distances to the wall ends, in plan and elevation (the drawing's own dimensions are DrawingDimensions). */
 export function DimensionLines() {
   const ed = useEditor();
   const view = useUi((s) => s.view);
+  const show = useUi((s) => s.showDimensions);
   const elevationWallId = useUi((s) => s.elevationWallId);
   const selection = useUi((s) => s.selection);
   const walls = useDerived((s) => s.derived?.room.walls ?? []);
   const sel = useDoc((d) => (selection.length === 1 ? d.fixtures.find((f) => f.id === selection[0]) : undefined));
   const selWidth = useDerived((s) => (sel ? s.fixtureById.get(sel.id)?.footprint.widthMm : undefined));
-  if (view === "orbit") return null;
+  if (view === "orbit" || !show) return null;
   const shownWall = view === "elevation" ? (elevationWallId ?? walls[0]?.id) : undefined;
   const selWall = sel?.placement.mode === "wall" ? walls.find((w) => sel.placement.mode === "wall" && w.id === sel.placement.wallId && (!shownWall || w.id === shownWall)) : undefined;
   return (
     <group name="dimensions">
-      {walls.map((w, i) =>
-        // In elevation the other walls' lines fall onto this wall's; only its own length is shown.
-        shownWall && w.id !== shownWall ? null : (
-          <Dim key={w.id} wall={w} from={0} to={w.lengthMm} off={-350} text={`${i + 1}: ${ed.formatLength(w.lengthMm)}`} testId={`dim-wall-${i + 1}`} />
-        ),
-      )}
       {selWall && sel?.placement.mode === "wall" && selWidth !== undefined ? (
         <>
           <Dim wall={selWall} from={0} to={sel.placement.offsetMm} off={-150} text={ed.formatLength(sel.placement.offsetMm)} testId="dim-offset" />

@@ -4,6 +4,7 @@ import type { Editor } from "@/lib/client/editor";
 import { EditorProvider } from "@/lib/client/react/EditorContext";
 import { CameraRig } from "./CameraRig";
 import { DimensionLines } from "./DimensionLines";
+import { DrawingDimensions } from "./DrawingDimensions";
 import { FrameCounter } from "./FrameCounter";
 import { Ghost, TapeLine } from "./GhostAndTape";
 import { PointerBridge } from "./PointerBridge";
@@ -52,6 +53,7 @@ export default function EditorCanvas({ editor, label }: { editor: Editor; label:
             <Ghost />
             <TapeLine />
             <DimensionLines />
+            <DrawingDimensions />
           </group>
           <PointerBridge />
           <FrameCounter />

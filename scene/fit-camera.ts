@@ -6,8 +6,11 @@ import type { ViewMode } from "@/lib/client/store/ui-store";
 import { boundsOf, roomDepthFrom } from "./frame";
 import { M } from "./units";
 
+/** Room an elevation leaves around the wall for its dimension strings, CSS px: the rows under the floor, the levels at the left, the heights at the right. */
+const ELEVATION_MARGIN_PX = { bottom: 230, top: 24, left: 110, right: 70 };
+
 /** Points the camera at the room (or the given fixtures) for the view, and fits it to the canvas size in pixels. */
-export function fitCamera(camera: Camera, controls: OrbitControlsImpl, d: Derived, view: ViewMode, wallId: string | null, bodies: readonly PlacedFixture[], size: { width: number; height: number }): boolean {
+export function fitCamera(camera: Camera, controls: OrbitControlsImpl, d: Derived, view: ViewMode, wallId: string | null, bodies: readonly PlacedFixture[], size: { width: number; height: number }, dimensions = false): boolean {
   const pts = bodies.length ? bodies.flatMap((f) => f.body.polygon) : d.room.corners;
   const top = bodies.length ? Math.max(...bodies.map((f) => f.body.zMax)) : d.room.ceilingHeightMm;
   const b = boundsOf(pts, top);
@@ -30,6 +33,17 @@ export function fitCamera(camera: Camera, controls: OrbitControlsImpl, d: Derive
     c.set(mid.x * M, mid.y * M, zMid);
     camera.position.set((mid.x + wall.inward.x * back) * M, (mid.y + wall.inward.y * back) * M, zMid);
     camera.zoom = Math.min(size.width / (wall.lengthMm * M * 1.15 + 0.6), size.height / (d.room.ceilingHeightMm * M * 1.15 + 0.6));
+    if (dimensions && !bodies.length) {
+      // Leave the dimension strings room and set the wall in what is left.
+      const m = ELEVATION_MARGIN_PX;
+      const w = Math.max(80, size.width - m.left - m.right);
+      const h = Math.max(80, size.height - m.bottom - m.top);
+      camera.zoom = Math.min(w / (wall.lengthMm * M * 1.04), h / (d.room.ceilingHeightMm * M * 1.04));
+      // The wall's centre sits right of and above the canvas centre: the camera looks left of it (along the wall's direction, the viewer's left) and below.
+      const right = (m.left - m.right) / 2 / camera.zoom;
+      c.set(c.x + wall.dir.x * right, c.y + wall.dir.y * right, zMid - (m.bottom - m.top) / 2 / camera.zoom);
+      camera.position.set((mid.x + wall.inward.x * back) * M + wall.dir.x * right, (mid.y + wall.inward.y * back) * M + wall.dir.y * right, c.z);
+    }
   } else return false;
   if (camera instanceof PerspectiveCamera || camera instanceof OrthographicCamera) camera.updateProjectionMatrix();
   controls.target.copy(c);

@@ -17,6 +17,7 @@ export function ViewBar() {
   const walls = useDoc((d) => d.room.walls);
   const tool = useUi((s) => s.tool);
   const placing = useUi((s) => s.placingKind);
+  const dims = useUi((s) => s.showDimensions);
   return (
     <div className="flex flex-wrap items-center gap-2">
       <div role="group" aria-label="View" className="inline-flex overflow-hidden rounded border border-walnut-300">
@@ -26,6 +27,11 @@ export function ViewBar() {
           </button>
         ))}
       </div>
+      {view !== "orbit" ? (
+        <button type="button" aria-pressed={dims} title="Show or hide dimensions (D)" className="rounded border border-walnut-300 px-2 py-1 text-xs focus-visible:outline-none focus-visible:ring-2 focus-visible:ring-amberline-500 aria-pressed:bg-walnut-700 aria-pressed:text-paper" onClick={() => run(ed, "toggle-dimensions")}>
+          Dimensions
+        </button>
+      ) : null}
       {view === "elevation" ? (
         <label className="flex items-center gap-1 text-xs">
           <span aria-hidden="true">Wall</span>

@@ -24,6 +24,17 @@ export const viewCommands: Command[] = [
   },
   { name: "next-wall", label: "Next wall in elevation", group: "view", shortcuts: ["]"], perform: (ed) => cycleWall(ed, 1) },
   { name: "previous-wall", label: "Previous wall in elevation", group: "view", shortcuts: ["["], perform: (ed) => cycleWall(ed, -1) },
+  {
+    name: "toggle-dimensions",
+    label: "Show or hide dimensions",
+    group: "view",
+    shortcuts: ["D"],
+    perform: (ed) => {
+      const on = !ed.ui.getState().showDimensions;
+      ed.ui.setState({ showDimensions: on });
+      ed.announce(on ? "Dimensions shown." : "Dimensions hidden.");
+    },
+  },
   { name: "frame-all", label: "Frame the whole room", group: "view", shortcuts: ["F"], perform: (ed) => ed.frame([]) },
   { name: "frame-selection", label: "Frame the selection", group: "view", shortcuts: ["Shift+F"], perform: (ed) => ed.frame(ed.selection) },
   { name: "help", label: "Keyboard shortcuts", group: "help", shortcuts: ["?"], perform: (ed) => ed.ui.setState({ helpOpen: !ed.ui.getState().helpOpen }) },

@@ -44,6 +44,8 @@ export interface UiState {
   snapping: boolean;
   /** Draw every keep-clear zone, not only failing ones, the room's and the selection's. */
   showAllZones: boolean;
+  /** Draw the dimension strings in the plan and elevation views. */
+  showDimensions: boolean;
   tool: string;
   /** The fixture kind chosen in the catalogue while placing. */
   placingKind: string | null;
@@ -68,6 +70,7 @@ export function createUiStore(init: Partial<UiState> = {}) {
     gridSize: "normal",
     snapping: true,
     showAllZones: false,
+    showDimensions: true,
     tool: "idle",
     placingKind: null,
     ghost: null,

@@ -7,15 +7,20 @@ import { formatLength } from "../units/format-length";
 import { dimension } from "./dimensions";
 import { freeLabel, legendLabels, placeLabel, type LabelContext } from "./labels";
 import { OBSTACLE_NAMES, OPENING_NAMES, wallName } from "./names";
+import { planDetailDimensions } from "./plan-details";
 import { toPlanSheet, wallShapes } from "./plan-walls";
 import { finishDrawing, textSizeFor } from "./sheet";
 import { rectAround, RectIndex } from "./text-fit";
-import type { Drawing, DrawingShape, SheetPoint } from "./types";
+import type { DimensionLine, Drawing, DrawingShape, SheetPoint } from "./types";
 
 /** Options for the plan view. */
 export interface PlanViewOptions {
   /** Draw the keep-clear zones (on their own layer, which a viewer may hide). Default true. */
   keepClear?: boolean;
+  /** Add each wall fixture's depth, the walkways in front of what stands on the floor and the clear length each side of a miter saw's blade. Default false. */
+  detail?: boolean;
+  /** Lay the text out at this height instead of the drawing's own, sheet mm (a live view sets it from its zoom). */
+  textSizeMm?: number;
 }
 
 /** A fixture hangs above the floor (drawn dashed in plan) when its lowest point is this high, mm. */
@@ -42,6 +47,33 @@ function swingMarks(zone: WorldZone, jambs: [Vec2, Vec2], ref: string): DrawingS
   ];
 }
 
+/** The plan view's own text height for this room, sheet mm. */
+function planTextSize(derived: Derived): number {
+  const box = rectAround(derived.room.corners.map(toPlanSheet));
+  return textSizeFor(Math.max(box.x1 - box.x0, box.y1 - box.y0) + 2 * DRAWN_WALL_THICKNESS_MM);
+}
+
+/** Each wall's solved length, outside the room (plan sheet mm). */
+function wallLengthDimensions(derived: Derived, size: number, format: (mm: number) => string): DimensionLine[] {
+  const t = DRAWN_WALL_THICKNESS_MM;
+  return derived.room.walls.map((w) => {
+    const f = frameOfWall(w);
+    const out = { x: -f.inward.x, y: f.inward.y };
+    return dimension(toPlanSheet(w.start), toPlanSheet(w.end), out, t + size * 1.5, f.lengthMm, { sizeMm: size, format, chain: "overall", ref: w.id });
+  });
+}
+
+/**
+ * The plan view's dimensions alone, as planView lays them out (plan sheet mm), for a live view
+ * that draws its own marks: each wall's solved length.
+ */
+export function planViewDimensions(plan: PlanDocument, derived: Derived, opts: PlanViewOptions = {}): DimensionLine[] {
+  const size = opts.textSizeMm ?? planTextSize(derived);
+  const format = (v: number) => formatLength(v, { units: plan.settings.units, precision: plan.settings.precision });
+  const walls = wallLengthDimensions(derived, size, format);
+  return opts.detail ? [...walls, ...planDetailDimensions(plan, derived, { sizeMm: size, format, chain: "" })] : walls;
+}
+
 /**
  * The room from above, in sheet mm (x as in the room, y down the sheet): walls with their
  * thickness and openings, door swings, obstacles, fixtures' footprints (wall-hung ones dashed),
@@ -50,8 +82,7 @@ function swingMarks(zone: WorldZone, jambs: [Vec2, Vec2], ref: string): DrawingS
 export function planView(plan: PlanDocument, derived: Derived, opts: PlanViewOptions = {}): Drawing {
   const room = derived.room;
   const t = DRAWN_WALL_THICKNESS_MM;
-  const box = rectAround(room.corners.map(toPlanSheet));
-  const size = textSizeFor(Math.max(box.x1 - box.x0, box.y1 - box.y0) + 2 * t);
+  const size = opts.textSizeMm ?? planTextSize(derived);
   const format = (v: number) => formatLength(v, { units: plan.settings.units, precision: plan.settings.precision });
   const shapes: DrawingShape[] = [{ type: "polygon", points: room.corners.map(toPlanSheet), role: "floor" }];
 
@@ -71,11 +102,7 @@ export function planView(plan: PlanDocument, derived: Derived, opts: PlanViewOpt
   for (const f of above) shapes.push({ type: "polygon", points: f.body.polygon.map(toPlanSheet), role: "fixture-above", ref: f.id });
 
   // Dimensions and wall names outside each wall.
-  const dimensions = room.walls.map((w) => {
-    const f = frameOfWall(w);
-    const out = { x: -f.inward.x, y: f.inward.y };
-    return dimension(toPlanSheet(w.start), toPlanSheet(w.end), out, t + size * 1.5, f.lengthMm, { sizeMm: size, format, chain: "overall", ref: w.id });
-  });
+  const dimensions = planViewDimensions(plan, derived, { ...opts, textSizeMm: size });
   const ctx: LabelContext = { sizeMm: size, taken: new RectIndex(size * 8), blockers: new RectIndex(size * 8), labels: [], leaders: [], legend: [] };
   room.walls.forEach((w, i) => {
     const f = frameOfWall(w);

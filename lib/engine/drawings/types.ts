@@ -73,6 +73,8 @@ export interface DimensionLine {
   /** Which chain it belongs to ("overall", "fixtures", "wall-hung", "openings", "heights") and what it measures. */
   chain: string;
   ref?: string;
+  /** What it measures, in words ("Counter height", "Upper cabinet: clear gap"), for a hover card or a screen reader. */
+  note?: string;
 }
 
 /** A tagged item listed under the drawing (its label did not fit its box). */

@@ -1,8 +1,10 @@
 import type { Derived } from "../derive-types";
+import type { PlacedFixture } from "../fixtures/types";
 import type { PlanDocument } from "../plan/schema";
 import { DRAWN_WALL_THICKNESS_MM, frameOfWall, fromViewersLeft, worldToWall, type WallFrame } from "../room/wall-frame";
 import { formatLength } from "../units/format-length";
 import { breakpoints, chainAlong, type DimensionStyle } from "./dimensions";
+import { elevationLevelDimensions } from "./elevation-levels";
 import { frontFaces, type FrontFace } from "./fixture-faces";
 import { legendLabels, placeLabel, type LabelContext } from "./labels";
 import { OBSTACLE_NAMES, OPENING_NAMES, wallName } from "./names";
@@ -33,20 +35,28 @@ interface Item {
   rect: SheetRect;
 }
 
+/** Options for a wall elevation. */
+export interface WallElevationOptions {
+  /** Add the detail a woodworker checks with a tape: counter heights, tool shelf and table, shelf and arm heights, counter-to-upper gaps. Default false. */
+  detail?: boolean;
+  /** Lay the text out at this height instead of the drawing's own, sheet mm (a live view sets it from its zoom). */
+  textSizeMm?: number;
+}
+
 /**
  * One wall seen from inside the room, in sheet mm: the viewer faces the wall, so the drawing's left
  * is their left (the wall's end corner in a counter-clockwise room). Its solved length, the front
  * faces of the fixtures against it, its openings and obstacles, dimension chains along the floor
  * that add up to the solved length, and a height chain. Null when the wall is not in the room.
  */
-export function wallElevation(plan: PlanDocument, derived: Derived, wallId: string): Drawing | null {
+export function wallElevation(plan: PlanDocument, derived: Derived, wallId: string, opts: WallElevationOptions = {}): Drawing | null {
   const wall = derived.room.walls.find((w) => w.id === wallId);
   if (!wall) return null;
   const frame = frameOfWall(wall);
   const L = frame.lengthMm;
   const H = derived.room.ceilingHeightMm;
   const t = DRAWN_WALL_THICKNESS_MM;
-  const size = textSizeFor(Math.max(L, H));
+  const size = opts.textSizeMm ?? textSizeFor(Math.max(L, H));
   const format = (v: number) => formatLength(v, { units: plan.settings.units, precision: plan.settings.precision });
   const name = wallName(plan.room.walls.find((w) => w.id === wallId)?.label, wall.index);
   const shapes: DrawingShape[] = [
@@ -107,8 +117,9 @@ export function wallElevation(plan: PlanDocument, derived: Derived, wallId: stri
   for (const l of ctx.leaders) shapes.push({ type: "polyline", points: l.points, role: "leader", ...(l.ref ? { ref: l.ref } : {}) });
 
   const dimensions = elevationDimensions(frame, H, fixtures, [...openings, ...obstacles], { sizeMm: size, format, chain: "" });
+  if (opts.detail) dimensions.push(...elevationLevelDimensions(fixtures.map((f) => ({ placed: f.placed, rect: f.item.rect })), { sizeMm: size, format, chain: "" }));
   const labels = [...ctx.labels];
-  const chainsBottom = Math.max(t, ...dimensions.filter((d) => d.chain !== "heights").map((d) => d.textAt.y)) + size * 1.5;
+  const chainsBottom = Math.max(t, ...dimensions.filter((d) => d.chain !== "heights" && d.textAt.y > 0).map((d) => d.textAt.y)) + size * 1.5;
   labels.push(...legendLabels(ctx.legend, { x: 0, y: chainsBottom }, size));
   const listed = fixtures.map((f) => f.item.text);
   return finishDrawing({
@@ -127,7 +138,7 @@ export function wallElevation(plan: PlanDocument, derived: Derived, wallId: stri
 }
 
 /** Rows of dimensions under the floor (fixtures on the floor, wall-hung fixtures, openings and obstacles, overall) and the heights at the right. */
-function elevationDimensions(frame: WallFrame, H: number, fixtures: { placed: { origin: { z: number }; workSurfaceMm?: number }; item: Item }[], others: Item[], base: DimensionStyle): DimensionLine[] {
+function elevationDimensions(frame: WallFrame, H: number, fixtures: { placed: PlacedFixture; item: Item }[], others: Item[], base: DimensionStyle): DimensionLine[] {
   const L = frame.lengthMm;
   const size = base.sizeMm;
   const floor = fixtures.filter((f) => -f.item.rect.y1 <= OFF_FLOOR_MM);

@@ -1,6 +1,6 @@
 import type { PlacedFixture } from "../../fixtures/types";
 import type { Vec2 } from "../../geometry/types";
-import { clearRun } from "../clear-run";
+import { clearRun, type RunResult } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
 import { centroid } from "../geom/polygon";
@@ -15,7 +15,8 @@ const SUPPORT_GAP_MM = 25;
 /** Stock width assumed when a tool shelf gives no stock-path zone: 5-1/2 in, a 1x6 (practice). */
 const FALLBACK_STOCK_WIDTH_MM = 140;
 
-function sideStrip(f: PlacedFixture, side: "left" | "right", lengthMm: number): { strip: Strip; zoneId?: string } {
+/** The band the stock runs along on one side of a miter saw's blade, from the blade out, `lengthMm` long. */
+export function sideStrip(f: PlacedFixture, side: "left" | "right", lengthMm: number): { strip: Strip; zoneId?: string } {
   const purpose = side === "left" ? PURPOSE.stockPathLeft : PURPOSE.stockPathRight;
   const zone = f.zones.find((z) => z.purpose === purpose);
   if (zone) {
@@ -32,6 +33,18 @@ function sideStrip(f: PlacedFixture, side: "left" | "right", lengthMm: number): 
   return { strip: makeStrip(origin, dir, FALLBACK_STOCK_WIDTH_MM, lengthMm) };
 }
 
+/** The clear run for stock along a strip at the saw's table height: what stands above the table in its path (mm). */
+export function stockRun(ctx: CheckContext, f: PlacedFixture, strip: Strip, tableMm: number): RunResult {
+  const n = ctx.numbers;
+  return clearRun(ctx, strip, {
+    zLo: tableMm + n.flushToleranceMm,
+    zHi: tableMm + n.stockThicknessMm,
+    excludeId: f.id,
+    // The stop track rides beside the stock, on the counter; it guides rather than blocks.
+    blocks: (s) => s.kind !== KIND.stopTrack,
+  });
+}
+
 function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const n = ctx.numbers;
@@ -43,13 +56,7 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     if (table === undefined) continue;
     for (const side of ["left", "right"] as const) {
       const { strip, zoneId } = sideStrip(f, side, n.longestStockMm);
-      const run = clearRun(ctx, strip, {
-        zLo: table + n.flushToleranceMm,
-        zHi: table + n.stockThicknessMm,
-        excludeId: f.id,
-        // The stop track rides beside the stock, on the counter; it guides rather than blocks.
-        blocks: (s) => s.kind !== KIND.stopTrack,
-      });
+      const run = stockRun(ctx, f, strip, table);
       const zoneIds = zoneId ? [zoneId] : [];
       const clearOk = run.clearMm >= n.longestStockMm - 0.5;
       const by = run.blocker ? `, blocked by ${run.blocker.label}` : "";

@@ -1,4 +1,5 @@
 import type { PlacedFixture } from "../../fixtures/types";
+import type { Vec2 } from "../../geometry/types";
 import { clearRun } from "../clear-run";
 import type { CheckContext } from "../context";
 import { finding } from "../finding";
@@ -23,28 +24,42 @@ export function frontStrip(f: PlacedFixture, lengthMm: number): Strip {
   return makeStrip(origin, { x: -s, y: c }, f.footprint.widthMm, lengthMm);
 }
 
+/** What stands in front of a fixture: the clear width up to `lengthMm`, what ends it, and where (mm). */
+export interface WalkwayRun {
+  clearMm: number;
+  blockerLabel?: string;
+  blockerFixture?: string;
+  at?: Vec2;
+}
+
+/** The clear way in front of a floor-standing fixture, up to `lengthMm`: to the next fixture, obstacle, wall or parked vehicle below head height. */
+export function walkwayInFront(ctx: CheckContext, f: PlacedFixture, lengthMm: number): WalkwayRun {
+  const strip = frontStrip(f, lengthMm);
+  const run = clearRun(ctx, strip, { zLo: 1, zHi: HEAD_HEIGHT_MM, excludeId: f.id });
+  let clear = run.clearMm;
+  let blockerLabel = run.blocker?.label;
+  let blockerFixture = run.blocker?.source === "fixture" ? run.blocker.id : undefined;
+  let at = run.at;
+  for (const zi of ctx.zoneIndex.query(stripBounds(strip, 1))) {
+    if (!VEHICLE_PURPOSES.has(zi.zone.purpose)) continue;
+    const d = firstHitConvex(strip, zi.zone.prism.polygon);
+    if (d < clear) {
+      clear = Math.max(0, d);
+      blockerLabel = "the parked vehicle";
+      blockerFixture = undefined;
+      at = fromStrip(strip, clear, 0);
+    }
+  }
+  return { clearMm: clear, blockerLabel, blockerFixture, at };
+}
+
 function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
   const out: Finding[] = [];
   const n = ctx.numbers;
   const note = ctx.presetNote("walkwayMm", "walkwayMinMm");
   for (const f of ctx.fixtures) {
     if ((ids && !ids.has(f.id)) || !isFloorStanding(f)) continue;
-    const strip = frontStrip(f, n.walkwayMm);
-    const run = clearRun(ctx, strip, { zLo: 1, zHi: HEAD_HEIGHT_MM, excludeId: f.id });
-    let clear = run.clearMm;
-    let blockerLabel = run.blocker?.label;
-    let blockerFixture = run.blocker?.source === "fixture" ? run.blocker.id : undefined;
-    let at = run.at;
-    for (const zi of ctx.zoneIndex.query(stripBounds(strip, 1))) {
-      if (!VEHICLE_PURPOSES.has(zi.zone.purpose)) continue;
-      const d = firstHitConvex(strip, zi.zone.prism.polygon);
-      if (d < clear) {
-        clear = Math.max(0, d);
-        blockerLabel = "the parked vehicle";
-        blockerFixture = undefined;
-        at = fromStrip(strip, clear, 0);
-      }
-    }
+    const { clearMm: clear, blockerLabel, blockerFixture, at } = walkwayInFront(ctx, f, n.walkwayMm);
     const ok = clear >= n.walkwayMm - 0.5;
     const hardFail = clear < n.walkwayMinMm - 0.5;
     const by = blockerLabel ? ` (to ${blockerLabel})` : "";
