@@ -4,6 +4,7 @@ import type { Units } from "@/lib/engine/plan/schema";
 import { useEditor } from "@/lib/client/react/EditorContext";
 import { useDoc, useUi } from "@/lib/client/react/useEditorState";
 import { setSettings } from "@/lib/client/store/room-ops";
+import { CounterHeightField } from "./CounterHeightField";
 
 const unitChoices: { value: Units; text: string }[] = [
   { value: "in", text: "Inches and fractions" },
@@ -13,7 +14,7 @@ const unitChoices: { value: Units; text: string }[] = [
 
 /**
  * The plan's settings in the editor: units (labels, typing and the grid steps follow them), fraction
- * precision, and the class preset whose numbers the checks use. Every choice is an edit of the
+ * precision, the counter height, and the class preset whose numbers the checks use. Every choice is an edit of the
  * document, saved by the autosave with its version like any other edit.
  */
 export function PlanSettings({ planId, canEdit }: { planId: string; canEdit: boolean }) {
@@ -46,6 +47,7 @@ export function PlanSettings({ planId, canEdit }: { planId: string; canEdit: boo
             </select>
           </label>
         </div>
+        <CounterHeightField canEdit={canEdit} />
         <PresetPicker
           planId={planId}
           canEdit={canEdit}

@@ -35,10 +35,19 @@ export function SchemaField({ spec, api, base = "" }: { spec: FieldSpec; api: Fo
               valueMm={typeof field.value === "number" ? field.value : null}
               allowZero={spec.allowZero}
               testId={`param-${path}`}
+              placeholder={spec.emptyMeans}
               onCommit={(mm) => {
                 field.onChange(mm);
                 api.commit();
               }}
+              onClear={
+                spec.emptyMeans
+                  ? () => {
+                      field.onChange(undefined);
+                      api.commit();
+                    }
+                  : undefined
+              }
             />
           )}
         />

@@ -2,7 +2,7 @@ import type { z } from "zod";
 
 /** A form field described from a zod schema; `path` is dot-separated from the params root. */
 export type FieldSpec =
-  | { kind: "length"; path: string; label: string; allowZero: boolean }
+  | { kind: "length"; path: string; label: string; allowZero: boolean; /** Set for a length that may be left empty: what empty means. */ emptyMeans?: string }
   | { kind: "number"; path: string; label: string; min?: number; max?: number; int: boolean }
   | { kind: "choice"; path: string; label: string; options: { value: string | number; label: string }[] }
   | { kind: "toggle"; path: string; label: string }
@@ -62,7 +62,10 @@ function fieldOf(key: string, path: string, schema: z.ZodType, parentKey: string
   const label = labelOf(key);
   switch (d.type) {
     case "number":
-      if (/Mm$/.test(key)) return { kind: "length", path, label, allowZero: s.safeParse(0).success };
+      if (/Mm$/.test(key)) {
+        const emptyMeans = schema.safeParse(undefined).success ? schema.description : undefined;
+        return { kind: "length", path, label, allowZero: s.safeParse(0).success, ...(emptyMeans ? { emptyMeans } : {}) };
+      }
       return { kind: "number", path, label, ...numberBounds(d) };
     case "boolean":
       return { kind: "toggle", path, label };

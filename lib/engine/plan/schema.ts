@@ -4,7 +4,7 @@ import { boundText, countRange, mmRange, numberRange, planText } from "./bounded
 import { PLAN_LIMITS } from "./limits";
 
 /**
- * The plan document, version 2. One schema: the database stores it, the API accepts it, export
+ * The plan document (version PLAN_SCHEMA_VERSION below). One schema: the database stores it, the API accepts it, export
  * and import use it. All lengths are millimetres; angles are degrees. Every number has a physical
  * minimum and maximum with its reason (helpers in ./bounded), and every list a cap (./limits).
  */
@@ -43,6 +43,12 @@ export const settingsSchema = z.object({
   userHeightMm: mmRange(900, 2500, { min: "shorter than a young student: check the units", max: "taller than nearly anyone: check the units" }).default(1755),
   /** Standing elbow height, mm; when absent it is estimated from stature. */
   elbowHeightMm: mmRange(500, 1600, { min: "lower than a young student's elbow: check the units", max: "higher than nearly anyone's elbow: check the units" }).optional(),
+  /**
+   * The height the counters stand at, floor to the top of the work surface, mm (36 in: kitchen
+   * convention, practice; 915 mm in metric plans). Base cabinets and workbenches follow it unless
+   * one has its own height; tool shelves follow the counters beside them.
+   */
+  counterHeightMm: mmRange(inch(24), inch(48), { min: "lower than any standing counter", max: "higher than a standing counter for anyone (the 95th-percentile elbow stands about 46 in high)" }).default(inch(36)),
   /** Flush tolerance for tool tables and counters, mm (1/32 in by default). */
   flushToleranceMm: mmRange(0, 25, { min: "0 asks for an exact match", max: "a step of more than an inch is not flush" }).default(0.79375),
   defaultSheetMaterialId: id.default("ply-18"),
@@ -216,7 +222,7 @@ export const fixtureSchema = z.object({
 });
 export type FixtureDoc = z.infer<typeof fixtureSchema>;
 
-export const PLAN_SCHEMA_VERSION = 2 as const;
+export const PLAN_SCHEMA_VERSION = 3 as const;
 
 export const planDocumentSchema = z.object({
   schemaVersion: z.literal(PLAN_SCHEMA_VERSION).meta({ description: "Format version; older files are upgraded on import." }),

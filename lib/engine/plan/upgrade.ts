@@ -1,5 +1,6 @@
 import { MM_PER_INCH } from "../units/length";
 import { PLAN_SCHEMA_VERSION, planDocumentSchema } from "./schema";
+import { upgradeCounter2to3 } from "./upgrade-counter";
 import { upgradeSides1to2 } from "./upgrade-sides";
 import type { PlanDocument } from "./schema";
 
@@ -66,6 +67,7 @@ function upgrade0to1(doc: Raw): Raw {
 export const UPGRADE_STEPS: Readonly<Record<number, UpgradeStep>> = Object.freeze({
   0: { from: 0, describe: "Inches to millimetres; walls get ids; fixtures placed by wall id.", up: upgrade0to1 },
   1: { from: 1, describe: "Left and right as seen facing the wall (door hinges, stop-track sides, blade offsets flipped); stop tracks attached to the nearest saw on their wall.", up: upgradeSides1to2 },
+  2: { from: 2, describe: "The plan's counter height; base cabinets without a carcass height keep the earlier 34-1/2 in.", up: upgradeCounter2to3 },
 });
 
 /**

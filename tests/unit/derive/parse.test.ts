@@ -11,11 +11,11 @@ describe("parsePlan", () => {
     const r = parsePlan(withFixtures([{ id: "c1", kind: "base-cabinet", placement: wall(), params: { widthMm: 24 * IN } }]));
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    const p = r.plan.fixtures[0].params as { widthMm: number; depthMm: number; carcassHeightMm: number };
+    const p = r.plan.fixtures[0].params as { widthMm: number; depthMm: number; carcassHeightMm?: number };
     expect(p.widthMm).toBeCloseTo(24 * IN, 6);
-    // Kitchen convention (practice): 24 in deep, 34-1/2 in carcass.
+    // Kitchen convention (practice): 24 in deep; no carcass height of its own, so it follows the plan's counter height.
     expect(p.depthMm).toBeCloseTo(24 * IN, 6);
-    expect(p.carcassHeightMm).toBeCloseTo(34.5 * IN, 6);
+    expect(p.carcassHeightMm).toBeUndefined();
   });
 
   it("reports parameter problems at fixtures.N.params.field", () => {

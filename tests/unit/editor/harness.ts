@@ -54,7 +54,7 @@ export const stubEngine: EnginePort = {
 export function roomDoc(): PlanDocument {
   return {
     schemaVersion: PLAN_SCHEMA_VERSION,
-    settings: { units: "mm", precision: 16, kerfMm: 3.175, longestStockMm: 2438.4, userHeightMm: 1755, flushToleranceMm: 0.79375, defaultSheetMaterialId: "ply-18", presetId: null },
+    settings: { units: "mm", precision: 16, kerfMm: 3.175, longestStockMm: 2438.4, userHeightMm: 1755, counterHeightMm: 914.4, flushToleranceMm: 0.79375, defaultSheetMaterialId: "ply-18", presetId: null },
     room: {
       walls: [
         { id: "w1", label: "", lengthMm: 4000 },

@@ -5,6 +5,9 @@ import { liveEngine } from "@/lib/client/engine-live";
 import { createPlacing } from "@/lib/client/tools/placing";
 import { setParams } from "@/lib/client/store/fixture-ops";
 
+/** A default cabinet follows the 36 in counter height: its carcass is 914.4 mm less its 32.95 mm countertop (12.7 + 19.05 + 1.2). */
+const carcassOf = (p: Record<string, unknown>) => (typeof p.carcassHeightMm === "number" ? p.carcassHeightMm : 914.4 - 32.95);
+
 /** Places a kind on wall w3 with its left end at `offsetMm` (pointer at its centre, snapping off). */
 function place(ed: Editor, kind: string, offsetMm: number): string {
   ed.ui.setState({ snapping: false });
@@ -30,7 +33,7 @@ describe("editor on the real engine", () => {
     // Raise the right cabinet by 1 in. The shelf follows the mean of its two counters (engine rule),
     // so each side is 12.7 mm off, past the 1/32 in tolerance (plan setting).
     const f = ed.fixture(right)!;
-    ed.edit((d) => setParams(d, right, { ...f.params, carcassHeightMm: Number(f.params.carcassHeightMm) + 25.4 }));
+    ed.edit((d) => setParams(d, right, { ...f.params, carcassHeightMm: carcassOf(f.params) + 25.4 }));
     const failing = flush().filter((x) => !x.pass);
     expect(failing).toHaveLength(2);
     for (const x of failing) expect(x.measured).toBeCloseTo(12.7, 3);
@@ -86,7 +89,7 @@ describe("an adopted class preset", () => {
     const right = place(ed, "base-cabinet", ed.footprint(left)!.widthMm + ed.footprint(shelf)!.widthMm);
     const f = ed.fixture(right)!;
     // Raise the right counter 1/2 in: each side of the shelf is 6.35 mm off (the shelf follows the mean).
-    ed.edit((d) => setParams(d, right, { ...f.params, carcassHeightMm: Number(f.params.carcassHeightMm) + 12.7 }));
+    ed.edit((d) => setParams(d, right, { ...f.params, carcassHeightMm: carcassOf(f.params) + 12.7 }));
     const flush = () => ed.derived.getState().findings.filter((x) => x.ruleId === "table-flush");
     // Standard tolerance 1/32 in (0.79 mm, plan setting): both sides fail.
     expect(flush().filter((x) => !x.pass)).toHaveLength(2);
@@ -96,7 +99,7 @@ describe("an adopted class preset", () => {
     expect(flush()[0].required).toBeCloseTo(12.7, 6);
     expect(ed.ui.getState().presetName).toBe("Intro class");
     // Still in force for incremental re-checks after an edit (a drag step).
-    ed.edit((d) => setParams(d, right, { ...ed.fixture(right)!.params, carcassHeightMm: Number(f.params.carcassHeightMm) + 12 }));
+    ed.edit((d) => setParams(d, right, { ...ed.fixture(right)!.params, carcassHeightMm: carcassOf(f.params) + 12 }));
     expect(flush().every((x) => x.pass)).toBe(true);
     ed.setPreset(null);
     expect(flush().filter((x) => !x.pass)).toHaveLength(2);

@@ -31,6 +31,25 @@ describe("upgradePlan", () => {
     expect(doc.fixtures[0].params).toEqual({ topThicknessIn: 1.5 });
   });
 
+  it("versions 1 and 2 to 3: a base cabinet without a carcass height keeps the earlier 34-1/2 in (876.3 mm); given heights and other kinds stay", () => {
+    const v1 = {
+      schemaVersion: 1,
+      room: { walls: [{ id: "a", lengthMm: 5000 }, { id: "b", lengthMm: 4000 }, { id: "c", lengthMm: 5000 }, { id: "d", lengthMm: 4000 }] },
+      fixtures: [
+        { id: "run", kind: "base-cabinet", placement: { mode: "wall", wallId: "a", offsetMm: 0 }, params: {} },
+        { id: "tall", kind: "base-cabinet", placement: { mode: "wall", wallId: "a", offsetMm: 900 }, params: { carcassHeightMm: 900 } },
+        { id: "bench", kind: "workbench", placement: { mode: "wall", wallId: "c", offsetMm: 0 }, params: {} },
+      ],
+    };
+    const before = JSON.stringify(v1);
+    const doc = readPlanDocument(v1);
+    expect(JSON.stringify(v1)).toBe(before);
+    expect(doc.schemaVersion).toBe(PLAN_SCHEMA_VERSION);
+    expect(doc.fixtures.map((f) => f.params.carcassHeightMm)).toEqual([876.3, 900, undefined]);
+    // The counter height the earlier workbench (36 in) now follows: 36 in = 914.4 mm.
+    expect(doc.settings.counterHeightMm).toBeCloseTo(914.4, 9);
+  });
+
   it("leaves a current document as it is", () => {
     const doc = newPlanDocument();
     expect(planDocumentSchema.parse(upgradePlan(doc))).toEqual(doc);

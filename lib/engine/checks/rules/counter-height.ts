@@ -18,12 +18,19 @@ function check(ctx: CheckContext, ids?: ReadonlySet<string>): Finding[] {
     const below = elbow - top;
     const tooHigh = below < n.lightWorkBelowElbowMinMm - 0.5;
     const tooLow = below > n.heavyWorkBelowElbowMaxMm + 0.5;
-    const range = below <= n.lightWorkBelowElbowMaxMm ? "light work" : "heavy work";
+    const toLight = below - n.lightWorkBelowElbowMaxMm;
+    const toHeavy = n.lightWorkBelowElbowMaxMm - below;
+    const range =
+      Math.abs(toLight) <= 0.5
+        ? "both light and heavy work (where the two ranges meet)"
+        : toLight < 0
+          ? `light work, ${ctx.len(toHeavy)} above heavy work`
+          : `heavy work, ${ctx.len(toLight)} below light work`;
     const pos = below >= 0 ? `${ctx.len(below)} below` : `${ctx.len(-below)} above`;
     let msg: string;
     if (tooHigh) msg = `${f.label} top at ${ctx.len(top)} is ${pos} your elbow (${ctx.len(elbow)}); standing work wants it at least ${ctx.len(n.lightWorkBelowElbowMinMm)} below${note}.`;
     else if (tooLow) msg = `${f.label} top at ${ctx.len(top)} is ${pos} your elbow (${ctx.len(elbow)}); even heavy work wants it no more than ${ctx.len(n.heavyWorkBelowElbowMaxMm)} below${note}.`;
-    else msg = `${f.label} top at ${ctx.len(top)} is ${pos} your elbow: suits ${range}${note}.`;
+    else msg = `${f.label} top at ${ctx.len(top)} is ${pos} your elbow (${ctx.len(elbow)}): suits ${range}${note}.`;
     const required = tooLow ? n.heavyWorkBelowElbowMaxMm : n.lightWorkBelowElbowMinMm;
     out.push(
       finding(ID, "caution", !tooHigh && !tooLow, f.id, msg, {
