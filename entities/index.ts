@@ -9,6 +9,7 @@ import { PriceListSchema } from "./PriceList";
 import { RateBucketSchema } from "./RateBucket";
 import { RulePresetSchema } from "./RulePreset";
 import { ShareLinkSchema } from "./ShareLink";
+import { ShopCheckSchema } from "./ShopCheck";
 import { UserSchema } from "./User";
 import { WalkthroughSchema } from "./Walkthrough";
 import { WallPhotoSchema } from "./WallPhoto";
@@ -28,5 +29,6 @@ export const entities = [
   RulePresetSchema,
   WalkthroughSchema,
   WallPhotoSchema,
+  ShopCheckSchema,
   RateBucketSchema,
 ];

@@ -1,13 +1,16 @@
 /**
  * Bundles the server's engine worker (lib/server/engine-pool/worker.ts with lib/engine/) into one
  * plain JS file inside a build folder, for piscina to load: Next bundles server code, so the pool
- * needs a real file on disk. Run after `next build` by scripts/lib.sh build_app:
+ * needs a real file on disk. Also bundles the shop view's service worker
+ * (lib/client/shop/service-worker.ts), which app/shop-sw.js serves from the same folder. Run after
+ * `next build` by scripts/lib.sh build_app:
  *   tsx scripts/build-worker.ts <dist folder>
  */
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
 import { WORKER_FILE_NAME } from "../lib/server/engine-pool/worker-file";
+import { SHOP_SW_FILE_NAME } from "../lib/server/shop-sw-file";
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 
@@ -28,6 +31,25 @@ export async function buildEngineWorker(outFile: string): Promise<string> {
   return outFile;
 }
 
+/** Writes the shop view's service worker (one classic script for the browser, minified). */
+export async function buildShopServiceWorker(outFile: string): Promise<string> {
+  await build({
+    absWorkingDir: ROOT,
+    entryPoints: ["lib/client/shop/service-worker.ts"],
+    outfile: outFile,
+    bundle: true,
+    platform: "browser",
+    target: "es2022",
+    format: "iife",
+    minify: true,
+    define: { "process.env.NODE_ENV": '"production"' },
+    tsconfig: "tsconfig.json",
+    legalComments: "none",
+    logLevel: "warning",
+  });
+  return outFile;
+}
+
 if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
   const dist = process.argv[2];
   if (!dist) {
@@ -36,4 +58,6 @@ if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.me
   }
   const out = await buildEngineWorker(path.resolve(ROOT, dist, WORKER_FILE_NAME));
   console.log(`engine worker bundled: ${path.relative(ROOT, out)}`);
+  const sw = await buildShopServiceWorker(path.resolve(ROOT, dist, SHOP_SW_FILE_NAME));
+  console.log(`shop service worker bundled: ${path.relative(ROOT, sw)}`);
 }

@@ -62,6 +62,9 @@ function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnT
               Share
             </Link>
           ) : null}
+          <Link href={`/plans/${plan.id}/shop`} className="rounded border border-walnut-300 px-2 py-0.5 text-xs text-walnut-900 hover:bg-walnut-100" data-testid="shop-link">
+            At the saw (phone view)
+          </Link>
           <div className="ml-auto">
             <Toolbar />
           </div>

@@ -71,7 +71,7 @@ async function dragSteps(page: Page): Promise<{ sync: number[]; withReact: numbe
 }
 
 /** JavaScript of one page view, bytes as sent (gzip-encoded by the server). */
-interface ScriptBytes {
+export interface ScriptBytes {
   /** Scripts the document's HTML names: its <script> tags and the chunks the inline RSC payload lists for hydration. */
   first: number;
   /** Scripts loaded afterwards: next/dynamic chunks (the 3D view) and anything else fetched later. */
@@ -83,8 +83,8 @@ interface ScriptBytes {
 /** Goals from the editor issue, in kB (1000 bytes) of gzip-encoded JavaScript. */
 const GOAL_KB = { plan: 350, landing: 120 };
 
-const kib = (bytes: number) => (bytes / 1024).toFixed(1);
-const goalCell = (kB: number | null) => (kB === null ? "-" : `<= ${kB} kB (${(kB * 1000 / 1024).toFixed(1)} KiB)`);
+export const kib = (bytes: number) => (bytes / 1024).toFixed(1);
+export const goalCell = (kB: number | null) => (kB === null ? "-" : `<= ${kB} kB (${(kB * 1000 / 1024).toFixed(1)} KiB)`);
 
 /** Every .js the page has loaded so far: path, bytes on the wire (encoded body), decoded bytes. */
 async function loadedScripts(page: Page): Promise<{ path: string; encoded: number; decoded: number }[]> {
@@ -106,7 +106,7 @@ async function scriptBytes(page: Page, html: string): Promise<ScriptBytes> {
 }
 
 /** Opens `url`, waits until `ready` holds and the network is idle, and returns its JavaScript split. */
-async function measurePage(page: Page, url: string, ready?: string): Promise<ScriptBytes> {
+export async function measurePage(page: Page, url: string, ready?: string): Promise<ScriptBytes> {
   const res = await page.goto(url);
   if (!res) throw new Error(`no response for ${url}`);
   const html = await res.text();

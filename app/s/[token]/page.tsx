@@ -41,7 +41,12 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
             By {plan.ownerName} · last changed {new Date(plan.updatedAt).toLocaleDateString("en-US", { dateStyle: "medium" })}
           </p>
         </div>
-        <CopyPlanButton token={token} signedIn={!!user} prompt={sp.copy === "1" && !!user} />
+        <div className="flex flex-wrap items-center gap-2">
+          <a href={`/s/${token}/shop`} className="rounded border border-walnut-300 px-3 py-1.5 text-sm text-walnut-900 hover:bg-walnut-100" data-testid="shop-link">
+            At the saw (phone view)
+          </a>
+          <CopyPlanButton token={token} signedIn={!!user} prompt={sp.copy === "1" && !!user} />
+        </div>
       </header>
       <p className="rounded-md bg-steel-100 px-3 py-2 text-sm text-steel-700" data-testid="read-only-note">
         You are looking at a read-only copy. Nothing here can be changed; copy it into your own account to work on it.

@@ -150,6 +150,7 @@ export const TARGETS: Target[] = [
   { file: "v1/plans/[id]/invitations/[invId]/route.ts", method: "DELETE", path: (w) => `/api/v1/plans/${w.planId}/invitations/${w.invId}`, runs: 30 },
   { file: "v1/plans/[id]/members/[userId]/route.ts", method: "PATCH", path: (w) => `/api/v1/plans/${w.planId}/members/${w.memberId}`, seed: () => ({ role: "viewer" }) },
   { file: "v1/plans/[id]/members/[userId]/route.ts", method: "DELETE", path: (w) => `/api/v1/plans/${w.planId}/members/${w.memberId}`, runs: 30 },
+  { file: "v1/plans/[id]/progress/route.ts", method: "POST", path: planPath("/progress"), seed: () => ({ checks: [{ id: randomUUID(), item: "cut:rip-1:A1", delta: 1, madeAt: new Date().toISOString() }] }) },
   { file: "v1/plans/[id]/photos/route.ts", method: "POST", path: planPath("/photos"), seed: () => ({ wallId: "back", contentType: "image/jpeg", bytes: 20_000 }) },
   { file: "v1/plans/[id]/photos/[photoId]/route.ts", method: "PATCH", path: (w) => `/api/v1/plans/${w.planId}/photos/${w.photoId}`, seed: () => ({ scale: { ax: 1, ay: 1, bx: 30, by: 1, distanceMm: 600 } }) },
   { file: "v1/plans/[id]/photos/[photoId]/route.ts", method: "DELETE", path: (w) => `/api/v1/plans/${w.planId}/photos/${w.photoId}`, runs: 30 },
