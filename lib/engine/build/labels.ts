@@ -1,6 +1,6 @@
 import type { Part } from "../fixtures/types";
 import { layersOf } from "../nesting/pieces";
-import { groupParts } from "../parts/parts-list";
+import { partGroupKey } from "../parts/parts-list";
 import type { Material, PlanDocument } from "../plan/schema";
 import type { CutRow, FixtureLetter } from "./types";
 
@@ -55,30 +55,46 @@ export function cutRows(letters: readonly FixtureLetter[], parts: readonly Part[
   const labelOf = partLabels(letters, parts);
   const letterOf = new Map(letters.map((l) => [l.fixtureId, l.letter]));
   const mats = new Map(materials.map((m) => [m.id, m]));
-  const rows = groupParts(parts.filter((p) => p.qty > 0)).map((line): CutRow => {
-    const label = labelOf.get(line.partIds[0]) ?? "?";
-    const mat = mats.get(line.materialId);
-    const layers = layersOf(line.thicknessMm, mat?.thicknessMm);
-    return {
-      label,
-      key: line.key,
-      name: line.name,
-      qty: line.qty,
-      pieces: line.qty * layers,
-      layers,
-      lengthMm: line.lengthMm,
-      widthMm: line.widthMm,
-      thicknessMm: line.thicknessMm,
-      materialId: line.materialId,
-      materialName: mat?.name ?? line.materialId,
-      stock: line.stock,
-      grain: line.grain,
-      edges: line.edges,
-      joinery: line.joinery,
-      fixtures: line.fixtures.map((f) => ({ fixtureId: f.fixtureId, letter: letterOf.get(f.fixtureId) ?? "?", qty: f.qty })),
-      partIds: line.partIds,
-      setupIds: [],
-    };
+  // The parts list's grouping (partGroupKey), with each row's fixtures kept in a map: plans of hundreds of
+  // identical cabinets put hundreds of fixtures on one row.
+  const groups = new Map<string, { row: CutRow; perFixture: Map<string, number> }>();
+  for (const p of parts) {
+    if (!(p.qty > 0)) continue;
+    const key = partGroupKey(p);
+    let g = groups.get(key);
+    if (!g) {
+      const mat = mats.get(p.materialId);
+      const layers = layersOf(p.thicknessMm, mat?.thicknessMm);
+      const row: CutRow = {
+        label: labelOf.get(p.id) ?? "?",
+        key,
+        name: p.name,
+        qty: 0,
+        pieces: 0,
+        layers,
+        lengthMm: p.lengthMm,
+        widthMm: p.widthMm,
+        thicknessMm: p.thicknessMm,
+        materialId: p.materialId,
+        materialName: mat?.name ?? p.materialId,
+        stock: p.stock,
+        grain: p.grain,
+        edges: [...p.edges],
+        joinery: [...p.joinery],
+        fixtures: [],
+        partIds: [],
+        setupIds: [],
+      };
+      groups.set(key, (g = { row, perFixture: new Map() }));
+    }
+    g.row.qty += p.qty;
+    g.row.partIds.push(p.id);
+    g.perFixture.set(p.fixtureId, (g.perFixture.get(p.fixtureId) ?? 0) + p.qty);
+  }
+  const rows = [...groups.values()].map(({ row, perFixture }) => {
+    row.pieces = row.qty * row.layers;
+    row.fixtures = [...perFixture.entries()].map(([fixtureId, qty]) => ({ fixtureId, letter: letterOf.get(fixtureId) ?? "?", qty }));
+    return row;
   });
   rows.sort((a, b) => compareLabels(a.label, b.label));
   // Every part of a merged row carries the row's label: that is what gets pencilled on the piece.

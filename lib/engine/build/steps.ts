@@ -13,6 +13,7 @@ interface Draft {
   cuts: boolean;
 }
 
+const NUMBERED = /-\d+$/;
 const add = (m: Map<string, number>, label: string, qty: number) => m.set(label, (m.get(label) ?? 0) + qty);
 
 /**
@@ -56,10 +57,11 @@ export function buildSteps(letters: readonly FixtureLetter[], parts: readonly Pa
       drafts.push(...own.values());
       continue;
     }
+    let fallback: StepTemplate | undefined;
     for (const p of ps) {
       // Part ids are fixtureId:partKey with "-2", "-3" for the second and third of a kind in one fixture.
-      const key = p.id.slice(p.fixtureId.length + 1).replace(/-\d+$/, "");
-      const t = templates.find((x) => x.partKeys.includes(key)) ?? fallbackStep(f.name, ANCHORED_KINDS.has(f.kind));
+      const key = p.id.slice(p.fixtureId.length + 1).replace(NUMBERED, "");
+      const t = templates.find((x) => x.partKeys.includes(key)) ?? (fallback ??= fallbackStep(f.name, ANCHORED_KINDS.has(f.kind)));
       add(draftOf(t).parts, labelOf.get(p.id) ?? "?", p.qty);
     }
     // Keep the templates' order within the fixture.
@@ -67,20 +69,33 @@ export function buildSteps(letters: readonly FixtureLetter[], parts: readonly Pa
   }
   if (hasKicks) drafts.push(kicks);
   if (hasCabinets) drafts.push(install);
-  const setupsOf = (labels: ReadonlySet<string>, cuts: boolean) => setups.filter((s) => (cuts || (s.kind !== "rip" && s.kind !== "crosscut")) && s.items.some((i) => labels.has(i.label))).map((s) => s.id);
+  // Setups of each label, once, so a step's setups come from its labels rather than a scan of every setup.
+  const byLabel = new Map<string, number[]>();
+  setups.forEach((s, i) => {
+    for (const it of s.items) {
+      const list = byLabel.get(it.label);
+      if (!list) byLabel.set(it.label, [i]);
+      else if (list[list.length - 1] !== i) list.push(i);
+    }
+  });
+  const setupsOf = (labels: Iterable<string>, cuts: boolean) => {
+    const idx = new Set<number>();
+    for (const l of labels) for (const i of byLabel.get(l) ?? []) if (cuts || (setups[i].kind !== "rip" && setups[i].kind !== "crosscut")) idx.add(i);
+    return [...idx].sort((a, b) => a - b).map((i) => setups[i].id);
+  };
+  const letterOf = new Map(letters.map((l) => [l.fixtureId, l.letter]));
   // Stable sort by phase keeps plan order within a phase.
   const ordered = drafts.map((d, i) => ({ d, i })).sort((a, b) => PHASES.indexOf(a.d.phase) - PHASES.indexOf(b.d.phase) || a.i - b.i);
   return ordered.map(({ d }, i): BuildStep => {
-    const labels = new Set(d.parts.keys());
     return {
       id: d.id,
       order: i + 1,
       scope: d.scope,
       ...(d.fixtureId ? { fixtureId: d.fixtureId } : {}),
-      title: d.scope === "fixture" ? `${letters.find((l) => l.fixtureId === d.fixtureId)?.letter ?? "?"}: ${d.t.title}` : d.t.title,
+      title: d.scope === "fixture" ? `${letterOf.get(d.fixtureId ?? "") ?? "?"}: ${d.t.title}` : d.t.title,
       detail: d.t.detail,
       parts: [...d.parts.entries()].map(([label, qty]) => ({ label, qty })),
-      setupIds: setupsOf(labels, d.cuts),
+      setupIds: setupsOf(d.parts.keys(), d.cuts),
       timeNotes: [...(d.t.timeNotes ?? [])],
       cautions: [...(d.t.cautions ?? [])],
     };

@@ -1,4 +1,5 @@
 import "server-only";
+import type { BuildResult } from "@/lib/engine/build";
 import type { RuleNumbers } from "@/lib/engine/checks/numbers";
 import type { PlanDrawings } from "@/lib/engine/drawings/plan-drawings";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
@@ -13,7 +14,7 @@ import { ensureWorkerFile } from "./worker-file";
  * Time limits per task, ms, queue wait included. The largest plan the schema accepts analyses in a
  * few seconds on a 2-core machine; these leave room for a busy one.
  */
-export const TIME_LIMITS_MS = { analyze: 20_000, csv: 30_000, readOnly: 20_000 } as const;
+export const TIME_LIMITS_MS = { analyze: 20_000, csv: 30_000, readOnly: 20_000, build: 20_000 } as const;
 
 /** Largest analyze answer, bytes of JSON (the largest plan's full answer is about 0.6 MB). */
 export const MAX_ANALYSIS_BYTES = 2_000_000;
@@ -80,4 +81,9 @@ export function readOnlyViewInWorker(doc: PlanDocument, preset: { name: string; 
 /** The plan view and wall elevations, or null when the room cannot be solved. */
 export function drawingsInWorker(doc: PlanDocument): Promise<PlanDrawings | null> {
   return pool().run("drawings", { doc }, { timeLimitMs: TIME_LIMITS_MS.readOnly, doing: "draw" });
+}
+
+/** The plan's labelled cut list, setups, stop tables and build steps. */
+export function buildInWorker(plan: PlanDocument, opts: CallOptions = {}): Promise<BuildResult> {
+  return pool().run("build", { plan }, { timeLimitMs: opts.test?.timeLimitMs ?? TIME_LIMITS_MS.build, signal: opts.signal, doing: "turn into setups and build steps" });
 }

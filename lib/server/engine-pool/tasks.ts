@@ -4,6 +4,7 @@
  * structured clone, so they are plain data (findings lose their constructor on the way, which is
  * what the read-only pages need anyway).
  */
+import { buildFromPlan, type BuildResult } from "@/lib/engine/build";
 import { analyzePlan } from "@/lib/engine/checks/analyze";
 import { evaluatePlan } from "@/lib/engine/checks/evaluate";
 import type { RuleNumbers } from "@/lib/engine/checks/numbers";
@@ -95,4 +96,13 @@ export interface DrawingsInput {
 /** The plan view and wall elevations, or null when the room cannot be solved. */
 export function drawingsTask(input: DrawingsInput): PlanDrawings | null {
   return planDrawingsOrNull(input.doc);
+}
+
+export interface BuildInput {
+  plan: PlanDocument;
+}
+
+/** The plan's labelled cut list, setups, stop tables and build steps. */
+export function buildTask(input: BuildInput): BuildResult {
+  return buildFromPlan(input.plan);
 }

@@ -3,7 +3,7 @@
  * plain JS file in the build folder, which piscina loads in each worker thread. Each named export
  * is a task (pool.run(input, { name })).
  */
-import { analyze as analyzeTask, drawingsTask, partsCsvTask, readOnlyView, shoppingCsvTask, type AnalyzeInput } from "./tasks";
+import { analyze as analyzeTask, buildTask, drawingsTask, partsCsvTask, readOnlyView, shoppingCsvTask, type AnalyzeInput } from "./tasks";
 import { runTestHook, type TestHook } from "./test-hooks";
 
 /** The analyze task; a test may ask for a misbehaviour first (only where test hooks are on). */
@@ -23,4 +23,4 @@ export function ping(): string {
   return "pong";
 }
 
-export { drawingsTask as drawings, partsCsvTask as partsCsv, readOnlyView, shoppingCsvTask as shoppingCsv };
+export { buildTask as build, drawingsTask as drawings, partsCsvTask as partsCsv, readOnlyView, shoppingCsvTask as shoppingCsv };

@@ -66,6 +66,7 @@ export const planEntries: Entry[] = [
   },
   { file: "v1/plans/[id]/export/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export` }), expect: planRead(200) },
   { file: "v1/plans/[id]/export/parts.csv/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export/parts.csv` }), expect: planRead(200) },
+  { file: "v1/plans/[id]/build/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/build` }), expect: planRead(200) },
   { file: "v1/plans/[id]/export/shopping.csv/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export/shopping.csv` }), expect: planRead(200) },
   { file: "v1/plans/[id]/progress/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/progress` }), expect: planRead(200) },
   {
