@@ -37,7 +37,8 @@ BW_TEST_HOOKS=1 start_app "$APP_PORT" "$TEST_DIST" "$DATA/test-server.log"
 export BW_BASE_URL="http://127.0.0.1:$APP_PORT" BW_APP_PORT="$APP_PORT"
 
 step "unit and integration tests (vitest)"
-# BW_VITEST_ARGS limits vitest to some files; BW_SKIP_E2E=1 skips Playwright (both for quick local loops only).
+# BW_VITEST_ARGS limits vitest to some files, BW_E2E_ARGS Playwright to some specs; BW_SKIP_E2E=1 skips
+# Playwright (all three for quick local loops only).
 # shellcheck disable=SC2086
 ./node_modules/.bin/vitest run ${BW_VITEST_ARGS:-}
 # The fault test kills PostgreSQL, so it runs alone, after the others, and only on a server this
@@ -55,7 +56,8 @@ if [ "${BW_SKIP_E2E:-}" = 1 ]; then
 else
   step "end-to-end tests (Playwright, Chromium)"
   mkdir -p tests/artifacts
-  ./node_modules/.bin/playwright test
+  # shellcheck disable=SC2086
+  ./node_modules/.bin/playwright test ${BW_E2E_ARGS:-}
 fi
 step "work tree unchanged"
 check_tree
