@@ -4,6 +4,7 @@ import { useEditor } from "@/lib/client/react/EditorContext";
 import { useDoc, useUi } from "@/lib/client/react/useEditorState";
 import { setLabel, setParams } from "@/lib/client/store/fixture-ops";
 import { DerivedFacts } from "./DerivedFacts";
+import { StopTrackTable } from "./StopTrackTable";
 import { FixtureFindings } from "./FindingsList";
 import { FixturePlacement } from "./PlacementFields";
 import { SchemaForm } from "./SchemaForm";
@@ -52,6 +53,7 @@ export function PropertiesPanel() {
       <FixturePlacement fixture={fixture} />
       {schema ? <SchemaForm key={fixture.id} idPrefix={fixture.id} schema={schema} value={fixture.params} onValid={(next) => ed.edit((d) => setParams(d, fixture.id, next))} /> : <p className="text-xs text-brick-700">Unknown fixture kind.</p>}
       <DerivedFacts id={fixture.id} />
+      {fixture.kind === "stop-track" && <StopTrackTable id={fixture.id} />}
       <FixtureFindings id={fixture.id} />
       <div className="flex gap-2">
         <button type="button" className="rounded border border-walnut-300 px-2 py-1 text-xs" onClick={() => run(ed, "duplicate")}>

@@ -1,9 +1,12 @@
 import { nominalWidthName } from "@/lib/engine/boards/stock";
 import type { BoardPlan } from "@/lib/engine/boards/types";
+import { LabelsOn } from "./build/LabelChip";
+import { useLabels } from "./build/label-context";
 import type { Formatters } from "./format";
 
 /** The board plan: each board drawn to scale with its pieces in cutting order and what is left. */
 export function BoardLayouts({ plan, fmt }: { plan: BoardPlan; fmt: Formatters }) {
+  const { labelOf, selected } = useLabels();
   if (plan.groups.length === 0 && plan.unplaced.length === 0) return <p className="text-sm text-walnut-500">No solid-wood parts in this plan.</p>;
   return (
     <div className="flex flex-col gap-6">
@@ -18,6 +21,7 @@ export function BoardLayouts({ plan, fmt }: { plan: BoardPlan; fmt: Formatters }
             <p className="text-sm text-walnut-700">
               {g.boards.length} boards, {fmt.len(g.totalLengthMm)} in all · fewest possible {g.lowerBound} · yield {g.yieldPct.toFixed(0)}%
             </p>
+            <LabelsOn partIds={g.boards.flatMap((b) => b.cuts.map((c) => c.partId))} what="stock" />
             <ul className="mt-2 flex flex-col gap-2">
               {g.boards.map((b) => (
                 <li key={b.index} className="break-inside-avoid">
@@ -32,17 +36,29 @@ export function BoardLayouts({ plan, fmt }: { plan: BoardPlan; fmt: Formatters }
                         <line x1={0} y1={0} x2={0} y2={30} stroke="#b89c80" strokeWidth={4} />
                       </pattern>
                     </defs>
-                    {b.cuts.map((c) => (
-                      <g key={c.pieceKey}>
-                        <rect x={c.offsetMm} y={10} width={c.lengthMm} height={100} fill="#fdf0cf" stroke="#4b3423" strokeWidth={3} />
-                        <title>{`${c.name}: ${fmt.len(c.lengthMm)} x ${fmt.len(c.widthMm)}`}</title>
-                        {c.lengthMm > 500 && (
-                          <text x={c.offsetMm + c.lengthMm / 2} y={70} fontSize={48} textAnchor="middle" fill="#2a1c12">
-                            {c.name} {fmt.len(c.lengthMm)}
-                          </text>
-                        )}
-                      </g>
-                    ))}
+                    {b.cuts.map((c) => {
+                      const label = labelOf[c.partId];
+                      const hit = label !== undefined && label === selected;
+                      return (
+                        <g key={c.pieceKey} data-label={label}>
+                          <rect x={c.offsetMm} y={10} width={c.lengthMm} height={100} fill={hit ? "#e5e9ee" : "#fdf0cf"} stroke={hit ? "#36414e" : "#4b3423"} strokeWidth={hit ? 10 : 3} />
+                          <title>{`${label ? `${label} ` : ""}${c.name}: ${fmt.len(c.lengthMm)} x ${fmt.len(c.widthMm)}`}</title>
+                          {c.lengthMm > 500 ? (
+                            <text x={c.offsetMm + c.lengthMm / 2} y={70} fontSize={48} textAnchor="middle" fill="#2a1c12">
+                              {label && <tspan fontWeight="bold">{label} </tspan>}
+                              {c.name} {fmt.len(c.lengthMm)}
+                            </text>
+                          ) : (
+                            label &&
+                            c.lengthMm > 40 * label.length && (
+                              <text x={c.offsetMm + c.lengthMm / 2} y={70} fontSize={48} fontWeight="bold" textAnchor="middle" fill="#2a1c12">
+                                {label}
+                              </text>
+                            )
+                          )}
+                        </g>
+                      );
+                    })}
                   </svg>
                 </li>
               ))}

@@ -15,9 +15,13 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import type { Part } from "@/lib/engine/fixtures/types";
+import { LabelChip } from "./build/LabelChip";
+import { useLabels } from "./build/label-context";
 import type { Formatters } from "./format";
 
 export interface PartRow extends Part {
+  /** The label pencilled on the piece (the build result's). */
+  label: string;
   fixtureLabel: string;
   materialName: string;
 }
@@ -30,11 +34,13 @@ export function PartsTable({ rows, fmt }: { rows: PartRow[]; fmt: Formatters }) 
   const [groupBy, setGroupBy] = useState<GroupBy>("materialName");
   const [filter, setFilter] = useState("");
   const [expanded, setExpanded] = useState<ExpandedState>(true);
+  const { selected } = useLabels();
   // A stable array: a new one each render would make the table regroup and reset expansion in a loop.
   const grouping = useMemo<GroupingState>(() => (groupBy === "none" ? [] : [groupBy]), [groupBy]);
 
   const columns = useMemo<ColumnDef<PartRow>[]>(
     () => [
+      { accessorKey: "label", header: "Label", cell: (c) => (c.getValue<string>() ? <LabelChip label={c.getValue<string>()} /> : null), aggregatedCell: () => null, enableGrouping: false },
       { accessorKey: "fixtureLabel", header: "Fixture" },
       { accessorKey: "name", header: "Part" },
       { accessorKey: "qty", header: "Qty", aggregationFn: "sum", aggregatedCell: (c) => <b>{c.getValue<number>()}</b> },
@@ -108,7 +114,7 @@ export function PartsTable({ rows, fmt }: { rows: PartRow[]; fmt: Formatters }) 
           </thead>
           <tbody>
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className={row.getIsGrouped() ? "bg-paper-deep font-semibold" : "border-b border-walnut-100 break-inside-avoid"}>
+              <tr key={row.id} className={row.getIsGrouped() ? "bg-paper-deep font-semibold" : `border-b border-walnut-100 break-inside-avoid ${selected !== null && row.original.label === selected ? "bg-steel-100" : ""}`}>
                 {row.getVisibleCells().map((cell) => (
                   <td key={cell.id} className="px-2 py-1 align-top">
                     {cell.getIsGrouped() ? (

@@ -1,4 +1,5 @@
 import type { SheetLayout } from "@/lib/engine/nesting/types";
+import { useLabels } from "./build/label-context";
 import type { Formatters } from "./format";
 
 /**
@@ -12,6 +13,7 @@ export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; ke
   const hatch = `hatch-${sheet.stockId}-${sheet.index}`;
   const hatchKeep = `${hatch}-keep`;
   const font = Math.max(22, Math.min(L, W) / 30);
+  const { labelOf, selected } = useLabels();
   return (
     <figure className="break-inside-avoid" data-testid="sheet-map">
       <figcaption className="mb-1 text-sm font-semibold text-walnut-900">
@@ -46,13 +48,23 @@ export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; ke
         ))}
         {sheet.placements.map((p) => {
           const big = p.lenMm > 5 * font && p.widMm > 2.4 * font;
+          const label = labelOf[p.partId];
+          const hit = label !== undefined && label === selected;
+          // Small pieces still show their label: it is what gets pencilled on the piece.
+          const fits = !big && label !== undefined && p.lenMm > 1.6 * font * label.length * 0.7 && p.widMm > 1.3 * font;
           return (
-            <g key={p.pieceKey}>
-              <rect x={p.xMm} y={p.yMm} width={p.lenMm} height={p.widMm} fill="#fdf0cf" stroke="#4b3423" strokeWidth={3} />
-              <title>{`${p.name}: ${fmt.size(p.rotated ? p.widMm : p.lenMm, p.rotated ? p.lenMm : p.widMm)}`}</title>
+            <g key={p.pieceKey} data-label={label}>
+              <rect x={p.xMm} y={p.yMm} width={p.lenMm} height={p.widMm} fill={hit ? "#e5e9ee" : "#fdf0cf"} stroke={hit ? "#36414e" : "#4b3423"} strokeWidth={hit ? 10 : 3} />
+              <title>{`${label ? `${label} ` : ""}${p.name}: ${fmt.size(p.rotated ? p.widMm : p.lenMm, p.rotated ? p.lenMm : p.widMm)}`}</title>
               {big && (
                 <text x={p.xMm + p.lenMm / 2} y={p.yMm + p.widMm / 2 - font * 0.6} fontSize={font} textAnchor="middle" fill="#2a1c12">
-                  {p.name.length > 28 ? `${p.name.slice(0, 27)}…` : p.name}
+                  {label && <tspan fontWeight="bold">{label} </tspan>}
+                  {p.name.length > 24 ? `${p.name.slice(0, 23)}…` : p.name}
+                </text>
+              )}
+              {fits && (
+                <text x={p.xMm + p.lenMm / 2} y={p.yMm + p.widMm / 2} fontSize={font} fontWeight="bold" textAnchor="middle" dominantBaseline="middle" fill="#2a1c12">
+                  {label}
                 </text>
               )}
               {big && (

@@ -2,6 +2,7 @@
 
 import type { NestingState } from "@/lib/client/useNesting";
 import type { Formatters } from "./format";
+import { LabelsOn } from "./build/LabelChip";
 import { CutList, SheetMap } from "./SheetMap";
 
 /** Sheet maps for every sheet material, with the search's progress and a cancel button. */
@@ -56,6 +57,7 @@ export function SheetMapsPanel({ nesting, kerfMm, fmt }: { nesting: NestingState
           {m.sheets.map((s) => (
             <div key={s.index} className="break-inside-avoid">
               <SheetMap sheet={s} kerfMm={kerfMm} fmt={fmt} title={`${m.materialName}, sheet ${s.index} of ${m.sheets.length}`} />
+              <LabelsOn partIds={s.placements.map((p) => p.partId)} what="sheet" />
               <CutList sheet={s} fmt={fmt} />
             </div>
           ))}

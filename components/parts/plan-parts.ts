@@ -1,16 +1,16 @@
 import { derivePlan } from "@/lib/engine/derive";
 import { getFixtureKind } from "@/lib/engine/fixtures/registry";
-import type { FixtureContext, HardwareItem, Part } from "@/lib/engine/fixtures/types";
+import type { FixtureContext, HardwareItem, Part, PlacedFixture } from "@/lib/engine/fixtures/types";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 
 /**
  * Parts and hardware of every fixture in the plan, from the engine's derivation (which knows
  * neighbouring counters). If the room cannot be solved, each kind's own definition is used.
  */
-export function planParts(plan: PlanDocument): { parts: Part[]; hardware: HardwareItem[] } {
+export function planParts(plan: PlanDocument): { parts: Part[]; hardware: HardwareItem[]; fixtures?: PlacedFixture[] } {
   try {
     const d = derivePlan(plan);
-    return { parts: d.parts, hardware: d.hardware };
+    return { parts: d.parts, hardware: d.hardware, fixtures: d.fixtures };
   } catch {
     return partsByKind(plan);
   }

@@ -77,7 +77,8 @@ describe.skipIf(!hasServer)("plan CSV exports", () => {
     expect(res.headers.get("content-disposition")).toContain("export-test-parts.csv");
     const text = await res.text();
     const lines = text.split("\r\n");
-    expect(lines[0]).toBe("Fixture,Part,Qty,Length,Width,Thickness,Length (mm),Width (mm),Thickness (mm),Material,Stock,Grain,Edges,Joinery");
+    // The label pencilled on each piece comes first (the build result's labels).
+    expect(lines[0]).toBe("Label,Fixture,Part,Qty,Length,Width,Thickness,Length (mm),Width (mm),Thickness (mm),Material,Stock,Grain,Edges,Joinery");
     expect(lines.length).toBeGreaterThan(5);
     expect((await bob.get(`/api/v1/plans/${planId}/export/parts.csv`)).status).toBe(404);
     expect((await new Client().get(`/api/v1/plans/${planId}/export/parts.csv`)).status).toBe(401);

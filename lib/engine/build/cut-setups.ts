@@ -34,9 +34,9 @@ export function sawDims(row: CutRow, materials: ReadonlyMap<string, Material>): 
 }
 
 /** The one station for a crosscut length: the handiest that takes every piece at it (stop track, miter saw, sled, panel cut). */
-function stationFor(lengthMm: number, widestMm: number, tracks: readonly TrackReach[]): { station: Station; track?: TrackReach } {
+function stationFor(lengthMm: number, widestMm: number, tracks: readonly TrackReach[], late: boolean): { station: Station; track?: TrackReach } {
   if (widestMm <= MITER_MAX_WIDTH_MM + 1e-6) {
-    const track = tracks.find((t) => lengthMm >= t.minCutMm - 1e-6 && lengthMm <= t.maxCutMm + 1e-6);
+    const track = !late ? undefined : tracks.find((t) => lengthMm >= t.minCutMm - 1e-6 && lengthMm <= t.maxCutMm + 1e-6);
     return track ? { station: "miter-saw-stop-track", track } : { station: "miter-saw" };
   }
   return { station: widestMm <= SLED_MAX_WIDTH_MM + 1e-6 ? "table-saw-sled" : "panel-cut" };
@@ -47,10 +47,11 @@ function stationFor(lengthMm: number, widestMm: number, tracks: readonly TrackRe
  * `stepMm`) share one setting, so there is one rip setup per distinct rip width and one crosscut setup per distinct
  * crosscut length. Rips run widest first (each narrower rip then comes from a piece still wide enough to ride
  * the fence safely; practice). Each crosscut length gets one station, the handiest that takes all its pieces: narrow
- * pieces at the miter saw (on a stop track when one reaches), wider ones on the sled (which takes narrow ones too),
+ * pieces at the miter saw (on a stop track when one reaches and every piece at that length is used only after the
+ * track is fitted, `late`: a track cannot cut the parts of the counters it sits on), wider ones on the sled (which takes narrow ones too),
  * panel cuts when one is wider than a sled; crosscuts run by station, longest first (long offcuts still feed short parts). Rows get their setup ids.
  */
-export function cutSetups(rows: readonly CutRow[], materials: ReadonlyMap<string, Material>, tracks: readonly TrackReach[], fmt: (mm: number) => string, stepMm: number): Setup[] {
+export function cutSetups(rows: readonly CutRow[], materials: ReadonlyMap<string, Material>, tracks: readonly TrackReach[], fmt: (mm: number) => string, stepMm: number, late: ReadonlySet<string> = new Set()): Setup[] {
   const key = (mm: number) => String(Math.round(mm / stepMm));
   const rips = new Map<string, Setup>();
   const lengths = new Map<string, LengthGroup>();
@@ -75,7 +76,7 @@ export function cutSetups(rows: readonly CutRow[], materials: ReadonlyMap<string
   }
   const cross = new Map<string, Setup>();
   for (const [k, g] of lengths) {
-    const { station, track } = stationFor(g.lengthMm, g.widest, tracks);
+    const { station, track } = stationFor(g.lengthMm, g.widest, tracks, g.items.every(({ row }) => late.has(row.label)));
     const s = blank("crosscut", station, { fenceMm: g.lengthMm, lengthMm: g.lengthMm });
     if (track) s.stopTrackId = track.fixtureId;
     for (const { row } of g.items) {
@@ -84,7 +85,7 @@ export function cutSetups(rows: readonly CutRow[], materials: ReadonlyMap<string
     }
     cross.set(k, s);
   }
-  const stationOrder: Station[] = ["panel-cut", "table-saw-sled", "miter-saw-stop-track", "miter-saw"];
+  const stationOrder: Station[] = ["panel-cut", "table-saw-sled", "miter-saw", "miter-saw-stop-track"];
   const ripList = [...rips.values()].sort((a, b) => (b.setting.fenceMm ?? 0) - (a.setting.fenceMm ?? 0));
   const crossList = [...cross.values()].sort((a, b) => stationOrder.indexOf(a.station) - stationOrder.indexOf(b.station) || (a.stopTrackId ?? "").localeCompare(b.stopTrackId ?? "") || (b.setting.lengthMm ?? 0) - (a.setting.lengthMm ?? 0));
   ripList.forEach((s, i) => {

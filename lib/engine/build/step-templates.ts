@@ -14,7 +14,7 @@ export const CAUTION_LIFT = "Get a helper to lift and hold cabinets and long ass
 export const CAUTION_SQUARE = "Check square by measuring both diagonals: equal diagonals mean a square box (practice).";
 
 /** When a step comes in the build, room-wide. */
-export type Phase = "kicks" | "cut" | "assemble" | "install" | "top" | "drawers" | "fronts" | "track" | "hang";
+export type Phase = "kicks" | "cut" | "assemble" | "install" | "top" | "track" | "repeat" | "frames" | "drawers" | "fronts" | "hang";
 
 /** A step of a fixture kind: which of its parts it uses (by part key, the part id after the colon). */
 export interface StepTemplate {
@@ -41,7 +41,9 @@ export const KIND_STEPS: Record<string, readonly StepTemplate[]> = {
     { phase: "kicks", key: "kick", title: "Build, level and fix the toe-kick platform", detail: "Screw the rails and cross members into a frame, set it on the floor line, shim it level from the high point and fix it down.", partKeys: ["kick-rail", "kick-cross"], cautions: ["Shim under the rails, never under the middle only, so the cabinet bears on its sides."] },
     { ...carcassGlue("carcass"), key: "carcass", partKeys: ["side", "bottom", "divider", "back"] },
     { phase: "assemble", key: "stretchers", title: "Fit the top stretchers", detail: "Pocket-screw the stretchers between the sides, flush with the top and front.", partKeys: ["stretcher"] },
-    { phase: "assemble", key: "face-frame", title: "Build and fit the face frame", detail: "Join rails to stiles with pocket screws on a flat surface, then glue and nail or clamp the frame to the carcass front.", partKeys: ["stile", "rail", "stile-mid"], timeNotes: [PVA_OPEN, PVA_CLAMP] },
+    // Face frames go on the installed carcasses (practice for built-ins: each frame is fitted in place), so their
+    // repeat lengths can be cut at the stop track once it is on the counter.
+    { phase: "frames", key: "face-frame", title: "Build and fit the face frame", detail: "Join rails to stiles with pocket screws on a flat surface, then glue and clamp the frame to the installed carcass front, flush with its sides.", partKeys: ["stile", "rail", "stile-mid"], timeNotes: [PVA_OPEN, PVA_CLAMP] },
     { phase: "top", key: "top-core", title: "Countertop core and build-up", detail: "Glue and screw the build-up strips under the core, screws short of the top face.", partKeys: ["buildup-long", "buildup-cross", "top-core"], timeNotes: [PVA_OPEN, PVA_CURE] },
     { phase: "top", key: "top-laminate", title: "Edge and laminate the countertop", detail: "Glue the edge to the core and build-up, flush it, then bond the laminate with contact cement and trim it with a flush bit.", partKeys: ["top-edge"], timeNotes: [PVA_CLAMP, CEMENT_FLASH], cautions: [CAUTION_FUMES] },
     { phase: "drawers", key: "drawer-boxes", title: "Build the drawer boxes and fit the slides", detail: "Glue the box sides to the front and back with the bottom floating in its groove; square it; fit the slide blocking and the slides.", partKeys: ["drawer-side", "drawer-end", "drawer-bottom", "slide-blocking"], timeNotes: [PVA_OPEN, PVA_CLAMP], cautions: [CAUTION_SQUARE] },
@@ -68,4 +70,15 @@ export function fallbackStep(name: string, anchored: boolean): StepTemplate {
 /** Kinds that stand on or hang from a wall and must be anchored. */
 export const ANCHORED_KINDS = new Set(["shelf-run", "lumber-rack", "cleat-wall", "pegboard", "wall-cabinet"]);
 
-export const PHASES: readonly Phase[] = ["cut", "kicks", "assemble", "install", "top", "drawers", "fronts", "track", "hang"];
+export const PHASES: readonly Phase[] = ["cut", "kicks", "assemble", "install", "top", "track", "repeat", "frames", "drawers", "fronts", "hang"];
+
+const NUMBERED = /-\d+$/;
+
+/** When a part is used in the build: its kind's template for the part's key, else the fixture's fallback step. */
+export function phaseOfPart(kind: string, partId: string, fixtureId: string): Phase {
+  const key = partId.slice(fixtureId.length + 1).replace(NUMBERED, "");
+  return (KIND_STEPS[kind] ?? []).find((t) => t.partKeys.includes(key))?.phase ?? (ANCHORED_KINDS.has(kind) ? "hang" : "assemble");
+}
+
+/** Parts used only after the stop track is fitted can be cut on it. */
+export const afterTrack = (phase: Phase) => PHASES.indexOf(phase) > PHASES.indexOf("track");

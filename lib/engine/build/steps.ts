@@ -33,6 +33,13 @@ export function buildSteps(letters: readonly FixtureLetter[], parts: readonly Pa
   const cut: Draft = { phase: "cut", id: "room-cut", scope: "room", t: { title: "Cut and machine the parts", detail: "Run the setups in order, making each setting once and cutting every piece that needs it. Pencil each piece's label on it as it comes off the saw." }, parts: new Map(), cuts: true };
   for (const r of rows) if (r.pieces > 0) add(cut.parts, r.label, r.pieces);
   drafts.push(cut);
+  // The stop track's repeat lengths wait until the track is on its counter.
+  const onTrack = setups.filter((s) => s.stopTrackId);
+  if (onTrack.length) {
+    const repeat: Draft = { phase: "repeat", id: "room-repeat", scope: "room", t: { title: "Cut the repeat lengths at the stop track", detail: "With the track fitted and its tape on, set a stop block at each length of the stop table and cut every piece at it; these pieces were ripped to width with the rest." }, parts: new Map(), cuts: true };
+    for (const s of onTrack) for (const i of s.items) add(repeat.parts, i.label, i.qty);
+    drafts.push(repeat);
+  }
   const kicks: Draft = { phase: "kicks", id: "room-kicks", scope: "room", t: { title: "Build, level and fix the toe-kick platforms", detail: "Screw each platform together, set them along the floor line, shim them level from the floor's high point and fix them down, so every cabinet above starts level and in line.", cautions: ["Shim under the rails, not just in the middle, so each cabinet bears on its sides."] }, parts: new Map(), cuts: false };
   const install: Draft = { phase: "install", id: "room-install", scope: "room", t: { title: "Set and anchor the cabinets", detail: "Set each carcass on its platform, clamp neighbours face frame to face frame, screw them together and anchor them.", cautions: [CAUTION_ANCHOR, CAUTION_LIFT] }, parts: new Map(), cuts: false };
   let hasKicks = false;
@@ -78,9 +85,11 @@ export function buildSteps(letters: readonly FixtureLetter[], parts: readonly Pa
       else if (list[list.length - 1] !== i) list.push(i);
     }
   });
-  const setupsOf = (labels: Iterable<string>, cuts: boolean) => {
+  // The cutting step runs every setup but the stop track's; the repeat step only the stop track's.
+  const fits = (d: Draft, s: Setup) => (d.id === "room-cut" ? !s.stopTrackId : d.id === "room-repeat" ? !!s.stopTrackId : s.kind !== "rip" && s.kind !== "crosscut");
+  const setupsOf = (labels: Iterable<string>, d: Draft) => {
     const idx = new Set<number>();
-    for (const l of labels) for (const i of byLabel.get(l) ?? []) if (cuts || (setups[i].kind !== "rip" && setups[i].kind !== "crosscut")) idx.add(i);
+    for (const l of labels) for (const i of byLabel.get(l) ?? []) if (fits(d, setups[i])) idx.add(i);
     return [...idx].sort((a, b) => a - b).map((i) => setups[i].id);
   };
   const letterOf = new Map(letters.map((l) => [l.fixtureId, l.letter]));
@@ -95,7 +104,7 @@ export function buildSteps(letters: readonly FixtureLetter[], parts: readonly Pa
       title: d.scope === "fixture" ? `${letterOf.get(d.fixtureId ?? "") ?? "?"}: ${d.t.title}` : d.t.title,
       detail: d.t.detail,
       parts: [...d.parts.entries()].map(([label, qty]) => ({ label, qty })),
-      setupIds: setupsOf(d.parts.keys(), d.cuts),
+      setupIds: setupsOf(d.parts.keys(), d),
       timeNotes: [...(d.t.timeNotes ?? [])],
       cautions: [...(d.t.cautions ?? [])],
     };

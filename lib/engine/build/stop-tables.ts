@@ -6,6 +6,9 @@ import type { PlanDocument } from "../plan/schema";
 import type { TrackReach } from "./cut-setups";
 import type { BuildStopRow, BuildStopTable, FixtureLetter, Setup } from "./types";
 
+/** How a note about a track with no saw starts (the plan's notes repeat it). */
+export const NO_SAW = "No saw:";
+
 /** Kinds a stop track can serve: a tool shelf holds the saw whose blade the track measures from. */
 const SAW_KINDS = new Set(["tool-shelf"]);
 
@@ -46,7 +49,7 @@ export function trackReaches(tracks: readonly TrackDoc[], kerfMm: number): Track
  * track's own setting.
  */
 export function buildStopTables(plan: PlanDocument, tracks: readonly TrackDoc[], setups: readonly Setup[]): BuildStopTable[] {
-  const hasSaw = plan.fixtures.some((f) => SAW_KINDS.has(f.kind));
+  const saws = new Set(plan.fixtures.filter((f) => SAW_KINDS.has(f.kind)).map((f) => f.id));
   return tracks.map((t): BuildStopTable => {
     const mine = setups.filter((s) => s.stopTrackId === t.fixtureId && s.setting.lengthMm !== undefined);
     const planLengths = mine.map((s) => s.setting.lengthMm as number);
@@ -67,7 +70,8 @@ export function buildStopTables(plan: PlanDocument, tracks: readonly TrackDoc[],
       };
     });
     const notes: string[] = [];
-    if (!hasSaw) notes.push("No saw station in the plan: the table assumes a saw whose blade sits at the track's near end, as the track's settings say. Add a tool shelf for the saw.");
+    if (t.params.sawId === null) notes.push(`${NO_SAW} the track is not on a saw, so the table measures from a blade at its typed start. Attach it to a saw station.`);
+    else if (!saws.has(t.params.sawId)) notes.push(`${NO_SAW} its saw (${t.params.sawId}) is gone from the plan, so the table measures from a blade at its typed start. Attach it to a saw station.`);
     const out = rows.filter((r) => !r.inReach).length;
     if (out) notes.push(`${out} typed length${out > 1 ? "s are" : " is"} out of the track's reach: cut ${out > 1 ? "them" : "it"} to a measured mark.`);
     if (rows.length === 0) notes.push("No repeat crosscuts of solid stock fall within this track's reach, and no lengths are typed on it.");

@@ -20,12 +20,17 @@ export function toCsv(rows: (string | number | null | undefined)[][]): string {
   return rows.map((r) => r.map(csvField).join(",")).join("\r\n") + "\r\n";
 }
 
-/** The parts list as CSV: sizes in the plan's units and in mm. */
-export function partsCsv(parts: readonly Part[], materials: readonly Material[], opts: { units: LengthUnits; precision?: InchPrecision }): string {
+/**
+ * The parts list as CSV: sizes in the plan's units and in mm. With `labelOf` (part id to label, from the build
+ * result) a Label column comes first, so a piece's pencilled label finds its line.
+ */
+export function partsCsv(parts: readonly Part[], materials: readonly Material[], opts: { units: LengthUnits; precision?: InchPrecision; labelOf?: Readonly<Record<string, string>> }): string {
   const f = (mm: number) => formatLength(mm, { units: opts.units, precision: opts.precision });
-  const rows: (string | number)[][] = [["Fixture", "Part", "Qty", "Length", "Width", "Thickness", "Length (mm)", "Width (mm)", "Thickness (mm)", "Material", "Stock", "Grain", "Edges", "Joinery"]];
+  const labels = opts.labelOf;
+  const head = ["Fixture", "Part", "Qty", "Length", "Width", "Thickness", "Length (mm)", "Width (mm)", "Thickness (mm)", "Material", "Stock", "Grain", "Edges", "Joinery"];
+  const rows: (string | number)[][] = [labels ? ["Label", ...head] : head];
   for (const p of parts) {
-    rows.push([
+    const row = [
       p.fixtureId,
       p.name,
       p.qty,
@@ -40,7 +45,8 @@ export function partsCsv(parts: readonly Part[], materials: readonly Material[],
       p.grain,
       p.edges.join("; "),
       p.joinery.join("; "),
-    ]);
+    ];
+    rows.push(labels ? [labels[p.id] ?? "", ...row] : row);
   }
   return toCsv(rows);
 }

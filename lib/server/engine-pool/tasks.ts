@@ -4,7 +4,7 @@
  * structured clone, so they are plain data (findings lose their constructor on the way, which is
  * what the read-only pages need anyway).
  */
-import { buildFromPlan, type BuildResult } from "@/lib/engine/build";
+import { buildFromPlan, buildPlan, type BuildResult } from "@/lib/engine/build";
 import { analyzePlan } from "@/lib/engine/checks/analyze";
 import { evaluatePlan } from "@/lib/engine/checks/evaluate";
 import type { RuleNumbers } from "@/lib/engine/checks/numbers";
@@ -38,7 +38,8 @@ export interface PartsCsvInput {
 /** The plan's parts list as CSV text. */
 export function partsCsvTask(input: PartsCsvInput): string {
   const d = derivePlan(input.plan);
-  return partsCsv(d.parts, input.plan.materials, input.plan.settings);
+  const { labelOf } = buildPlan(input.plan, d);
+  return partsCsv(d.parts, input.plan.materials, { ...input.plan.settings, labelOf });
 }
 
 export interface ShoppingCsvInput {

@@ -102,10 +102,16 @@ function check(b: BuildResult, parts: readonly Part[]): void {
   // Every part is in at least one step; fixture steps take each row's full quantity; steps name only real setups.
   const inSteps = new Set(b.steps.flatMap((s) => s.parts.map((p) => p.label)));
   for (const r of b.rows) expect(inSteps.has(r.label)).toBe(true);
-  const fixtureQty = sumBy(b.steps.filter((s) => s.id !== "room-cut").flatMap((s) => s.parts.map((p) => ({ key: p.label, n: p.qty }))));
+  const fixtureQty = sumBy(b.steps.filter((s) => s.id !== "room-cut" && s.id !== "room-repeat").flatMap((s) => s.parts.map((p) => ({ key: p.label, n: p.qty }))));
   for (const r of b.rows) expect(fixtureQty.get(r.label)).toBe(r.qty);
   for (const s of b.steps) for (const id of s.setupIds) expect(setupById.has(id)).toBe(true);
   expect(b.steps.map((s) => s.order)).toEqual(b.steps.map((_, i) => i + 1));
+  // Pieces crosscut on a stop track are cut after it is fitted, in the repeat step, never in the first cutting step.
+  const repeat = b.steps.find((s) => s.id === "room-repeat");
+  for (const s of b.setups.filter((x) => x.stopTrackId)) {
+    expect(repeat?.setupIds).toContain(s.id);
+    expect(b.steps[0].setupIds).not.toContain(s.id);
+  }
   // Stop tables list only crosscuts sent to their track, with the setup's quantity.
   for (const t of b.stopTables) for (const row of t.rows) if (row.setupId) expect(setupById.get(row.setupId)?.stopTrackId).toBe(t.fixtureId);
 }

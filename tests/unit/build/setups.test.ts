@@ -31,8 +31,8 @@ describe("setups", () => {
     expect(rip?.title).toBe('Rip fence at 25 1/2" from the blade');
   });
 
-  it("crosscuts run by station, longest first within each; narrow solid stock in reach goes to the stop track", () => {
-    const order = ["panel-cut", "table-saw-sled", "miter-saw-stop-track", "miter-saw"];
+  it("crosscuts run by station, longest first within each; narrow pieces used after the track is fitted go to the stop track", () => {
+    const order = ["panel-cut", "table-saw-sled", "miter-saw", "miter-saw-stop-track"];
     const st = cross.map((s) => order.indexOf(s.station));
     expect(st).toEqual([...st].sort((a, b) => a - b));
     for (const station of order) {
@@ -43,6 +43,12 @@ describe("setups", () => {
     const railCut = cross.find((s) => rails && s.items.some((i) => i.label === rails.label));
     expect(railCut?.station).toBe("miter-saw-stop-track");
     expect(railCut?.stopTrackId).toBe("stops");
+    // Toe-kick rails are narrow and in reach, but are needed before the counters (and the track on them) exist.
+    const kick = b.rows.find((r) => r.name === "Toe-kick rail");
+    expect(cross.find((s) => kick && s.items.some((i) => i.label === kick.label))?.station).toBe("miter-saw");
+    // The track's own fence is not cut on the track.
+    const fence = b.rows.find((r) => r.name === "Stop-track fence");
+    expect(cross.find((s) => fence && s.items.some((i) => i.label === fence.label))?.stopTrackId).toBeUndefined();
     // The 82 1/2 in rack uprights are past the 48 in track's reach: a measured mark at the miter saw.
     const uprights = b.rows.find((r) => r.name === "Upright" && r.materialId === "lumber-2x");
     expect(cross.find((s) => uprights && s.items.some((i) => i.label === uprights.label))?.station).toBe("miter-saw");
@@ -64,10 +70,12 @@ describe("setups", () => {
     for (const p of pockets) expect(p.setting.stockThicknessMm).toBeGreaterThan(0);
   });
 
-  it("run order numbers every setup once: rips, then crosscuts, then joinery", () => {
+  it("run order numbers every setup once: rips, crosscuts, machined joints, the stop track's repeat lengths, pocket holes", () => {
     expect(b.setups.map((s) => s.order)).toEqual(b.setups.map((_, i) => i + 1));
-    const kinds = b.setups.map((s) => (s.kind === "rip" ? 0 : s.kind === "crosscut" ? 1 : 2));
+    const rank = (s: (typeof b.setups)[number]) => (s.kind === "rip" ? 0 : s.kind === "crosscut" ? (s.stopTrackId ? 3 : 1) : s.kind === "pocket-screw" ? 4 : 2);
+    const kinds = b.setups.map(rank);
     expect(kinds).toEqual([...kinds].sort((a, c) => a - c));
+    expect(new Set(kinds)).toEqual(new Set([0, 1, 2, 3, 4]));
   });
 });
 
@@ -94,7 +102,7 @@ describe("bad input gives notes, not exceptions", () => {
     const noSaw: PlanDocument = { ...plan, fixtures: plan.fixtures.filter((f) => f.kind !== "tool-shelf") };
     const b = buildFromPlan(noSaw);
     expect(b.stopTables).toHaveLength(1);
-    expect(b.stopTables[0].notes.join(" ")).toMatch(/No saw station/);
+    expect(b.stopTables[0].notes.join(" ")).toMatch(/No saw: its saw \(saw\) is gone/);
     // Letters follow the stored order: with the tool shelf gone the track is the fifth fixture.
     expect(b.notes.join(" ")).toMatch(/Stop track E \(Stop track\)/);
   });

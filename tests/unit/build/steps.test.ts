@@ -7,12 +7,14 @@ describe("build order", () => {
   const titles = b.steps.map((s) => s.title);
   const at = (re: RegExp) => titles.findIndex((t) => re.test(t));
 
-  it("cuts first (each setting once), then kicks, carcasses, install, tops, drawers, fronts, the stop track, wall fixtures", () => {
-    const seq = [/^Cut and machine/, /toe-kick platforms/, /Glue up the carcass/, /Set and anchor/, /Countertop core/, /drawer boxes/, /drawer fronts/, /stop track/, /Hang the wall cabinet/];
+  it("cuts first (each setting once), kicks, carcasses, install, tops, the stop track and its repeat cuts, face frames, drawers, fronts, wall fixtures", () => {
+    const seq = [/^Cut and machine/, /toe-kick platforms/, /Glue up the carcass/, /Set and anchor/, /Countertop core/, /Fit the stop track/, /repeat lengths at the stop track/, /face frame/, /drawer boxes/, /drawer fronts/, /Hang the wall cabinet/];
     const idx = seq.map(at);
     for (const i of idx) expect(i).toBeGreaterThanOrEqual(0);
     expect(idx).toEqual([...idx].sort((x, y) => x - y));
-    expect(b.steps[0].setupIds).toEqual(b.setups.map((s) => s.id));
+    // The first cutting step runs every setup but the stop track's; those wait for the repeat step.
+    expect(b.steps[0].setupIds).toEqual(b.setups.filter((s) => !s.stopTrackId).map((s) => s.id));
+    expect(b.steps.find((s) => s.id === "room-repeat")?.setupIds).toEqual(b.setups.filter((s) => s.stopTrackId).map((s) => s.id));
   });
 
   it("fixture steps are titled with the fixture's letter and reference setups by id", () => {
@@ -42,7 +44,7 @@ describe("build order", () => {
   it("every part is in the cutting step and in exactly its quantity across its fixtures' steps", () => {
     for (const r of b.rows) {
       expect(b.steps[0].parts.find((p) => p.label === r.label)?.qty).toBe(r.pieces);
-      const n = b.steps.slice(1).reduce((s, st) => s + (st.parts.find((p) => p.label === r.label)?.qty ?? 0), 0);
+      const n = b.steps.filter((s) => s.id !== "room-cut" && s.id !== "room-repeat").reduce((s, st) => s + (st.parts.find((p) => p.label === r.label)?.qty ?? 0), 0);
       expect(n).toBe(r.qty);
     }
   });
