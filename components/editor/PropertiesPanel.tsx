@@ -1,19 +1,26 @@
 "use client";
 import { run } from "@/lib/client/commands/registry";
 import { useEditor } from "@/lib/client/react/EditorContext";
-import { useDoc, useUi } from "@/lib/client/react/useEditorState";
+import { useDerived, useDoc, useUi } from "@/lib/client/react/useEditorState";
+import { TRACK_KIND } from "@/lib/client/tools/track-attach";
 import { setLabel, setParams } from "@/lib/client/store/fixture-ops";
 import { DerivedFacts } from "./DerivedFacts";
 import { StopTrackTable } from "./StopTrackTable";
 import { FixtureFindings } from "./FindingsList";
 import { FixturePlacement } from "./PlacementFields";
 import { SchemaForm } from "./SchemaForm";
+import { TRACK_MOUNT_FIELDS, TrackMount } from "./TrackMount";
+
+const NONE: readonly string[] = [];
+/** On its saw, the fence's distance from the wall comes from the saw's fence too. */
+const TRACK_HIDDEN_ATTACHED: readonly string[] = [...TRACK_MOUNT_FIELDS, "fromWallMm"];
 
 /** The selected fixture's properties: position, parameters from its kind's schema, and what the engine works out. */
 export function PropertiesPanel() {
   const ed = useEditor();
   const selection = useUi((s) => s.selection);
   const fixture = useDoc((d) => (selection.length === 1 ? d.fixtures.find((f) => f.id === selection[0]) : undefined));
+  const attached = useDerived((s) => (fixture ? s.fixtureById.get(fixture.id)?.track?.attached === true : false));
   if (selection.length === 0) {
     return <p className="text-sm text-walnut-500">Select a fixture to see its properties. Tab to the outline list to select with the keyboard.</p>;
   }
@@ -33,6 +40,7 @@ export function PropertiesPanel() {
     );
   }
   const kind = ed.engine.kinds().find((k) => k.kind === fixture.kind);
+  const track = fixture.kind === TRACK_KIND;
   const schema = ed.engine.paramsSchema(fixture.kind);
   return (
     <div className="flex flex-col gap-3" data-testid="properties">
@@ -50,8 +58,15 @@ export function PropertiesPanel() {
           onBlur={(e) => ed.edit((d) => setLabel(d, fixture.id, e.target.value.slice(0, 80)))}
         />
       </div>
-      <FixturePlacement fixture={fixture} />
-      {schema ? <SchemaForm key={fixture.id} idPrefix={fixture.id} schema={schema} value={fixture.params} onValid={(next) => ed.edit((d) => setParams(d, fixture.id, next))} /> : <p className="text-xs text-brick-700">Unknown fixture kind.</p>}
+      {track ? <TrackMount fixture={fixture} /> : null}
+      {attached ? (
+        <p className="rounded border border-walnut-100 p-2 text-xs text-walnut-700" data-testid="track-follows">
+          Placed from its saw: it moves when the saw or the counters beside it move.
+        </p>
+      ) : (
+        <FixturePlacement fixture={fixture} />
+      )}
+      {schema ? <SchemaForm key={fixture.id} idPrefix={fixture.id} schema={schema} value={fixture.params} hide={track ? (attached ? TRACK_HIDDEN_ATTACHED : TRACK_MOUNT_FIELDS) : NONE} onValid={(next) => ed.edit((d) => setParams(d, fixture.id, next))} /> : <p className="text-xs text-brick-700">Unknown fixture kind.</p>}
       <DerivedFacts id={fixture.id} />
       {fixture.kind === "stop-track" && <StopTrackTable id={fixture.id} />}
       <FixtureFindings id={fixture.id} />

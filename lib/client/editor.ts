@@ -1,6 +1,7 @@
 import type { SolvedWall } from "@/lib/engine/room/types";
 import type { Footprint, PlacedFixture } from "@/lib/engine/fixtures/types";
 import type { FixtureDoc, PlanDocument } from "@/lib/engine/plan/schema";
+import { followSaws } from "@/lib/engine/fixtures/stop-track/follow";
 import { createDerivedStore, recompute, type Analyser, type DerivedStore } from "./derived/derived-store";
 import type { AdoptedPreset, EnginePort } from "./engine-port";
 import { createPlanStore, PlanHistory, type DocRecipe } from "./store/plan-store";
@@ -35,8 +36,10 @@ export class Editor {
     this.derived = createDerivedStore();
     this.analyse = this.engine.createAnalyser({ preset: () => this.presetInForce });
     recompute(this.derived, this.analyse, init.doc);
+    this.followSaws(true);
     this.unsub = this.history.store.subscribe((s) => {
       recompute(this.derived, this.analyse, s.doc);
+      if (this.followSaws(false)) return;
       this.pruneSelection(s.doc);
     });
     this.tools = new ToolController(this);
@@ -117,6 +120,22 @@ export class Editor {
   frame(ids: string[] = []): void {
     const n = this.ui.getState().frameRequest.n + 1;
     this.ui.setState({ frameRequest: { ids, n } });
+  }
+
+  /**
+   * Stop tracks follow their saws: after a change, write where derive put each attached track into the document,
+   * as part of the same undo step (on load, without one). True when the document changed.
+   */
+  private followSaws(loading: boolean): boolean {
+    const d = this.derived.getState();
+    if (!d.derived || d.doc !== this.doc) return false;
+    const next = followSaws(this.doc, d.derived);
+    if (next === this.doc) return false;
+    if (loading) {
+      this.history.replace(next);
+      recompute(this.derived, this.analyse, next);
+    } else this.history.amend(next);
+    return true;
   }
 
   private pruneSelection(doc: PlanDocument): void {

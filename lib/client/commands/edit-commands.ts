@@ -1,3 +1,4 @@
+import { pinTracksOf } from "@/lib/engine/fixtures/stop-track/follow";
 import { duplicateFixtures, removeFixtures } from "../store/fixture-ops";
 import { newId } from "../store/ids";
 import { createIdle } from "../tools/idle";
@@ -18,7 +19,9 @@ export const editCommands: Command[] = [
     enabled: hasSelection,
     perform: (ed) => {
       const ids = ed.selection;
-      if (ed.edit((doc) => removeFixtures(doc, ids))) ed.announce(`Deleted ${ids.length} fixture${ids.length > 1 ? "s" : ""}.`);
+      // Tracks on a deleted saw keep their place and start, and show as detached.
+      const derived = ed.derived.getState().derived;
+      if (ed.edit((doc) => removeFixtures(derived ? pinTracksOf(doc, derived, ids) : doc, ids))) ed.announce(`Deleted ${ids.length} fixture${ids.length > 1 ? "s" : ""}.`);
     },
   },
   {

@@ -24,6 +24,9 @@ interface Def {
 
 const defOf = (s: z.ZodType): Def => (s as unknown as { _zod: { def: Def } })._zod.def;
 
+/** Left and right are as a person standing in the room facing the wall sees them (door hinges, sides of a blade). */
+const SIDE_WORDS: Readonly<Record<string, string>> = { left: "left, as you face the wall", right: "right, as you face the wall" };
+
 /** Strips defaults, optionals and prefaults. */
 function unwrap(s: z.ZodType): z.ZodType {
   let cur = s;
@@ -70,7 +73,7 @@ function fieldOf(key: string, path: string, schema: z.ZodType, parentKey: string
     case "boolean":
       return { kind: "toggle", path, label };
     case "enum":
-      return { kind: "choice", path, label, options: Object.values(d.entries ?? {}).map((v) => ({ value: v, label: String(v) })) };
+      return { kind: "choice", path, label, options: Object.values(d.entries ?? {}).map((v) => ({ value: v, label: SIDE_WORDS[String(v)] ?? String(v) })) };
     case "union": {
       const lits = (d.options ?? []).map((o) => defOf(o)).filter((o) => o.type === "literal");
       if (lits.length !== (d.options ?? []).length) return null;

@@ -51,6 +51,19 @@ export class PlanHistory {
     return true;
   }
 
+  /**
+   * Replaces the current document without a history step of its own: the change belongs to the edit that led
+   * to it (a stop track following the saw the user moved), so one undo takes both back.
+   */
+  amend(doc: PlanDocument): void {
+    if (doc === this.doc) return;
+    const t = this.store.temporal.getState();
+    const tracking = t.isTracking;
+    if (tracking) t.pause();
+    this.store.setState({ doc });
+    if (tracking) t.resume();
+  }
+
   beginGesture(): void {
     if (this.gestureStart) return;
     this.gestureStart = this.doc;

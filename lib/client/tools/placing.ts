@@ -5,6 +5,7 @@ import { newId } from "../store/ids";
 import { createIdle } from "./idle";
 import { wallSpans, SNAP_THRESHOLD_MM } from "./neighbours";
 import { snapAlongWall, snapToGrid } from "./snap";
+import { attachNear } from "./track-attach";
 import type { PointerInput, ToolState } from "./types";
 import { frameOfWall, worldToWall } from "@/lib/engine/room/wall-frame";
 
@@ -47,16 +48,18 @@ export function createPlacing(kind: string): ToolState {
       ed.ui.setState({ placingKind: null, ghost: null });
     },
     move(ed, input) {
-      const placement = placementFor(ed, kind, params, input);
+      const placement = attachNear(ed, kind, params, input.point)?.placement ?? placementFor(ed, kind, params, input);
       ed.ui.setState({ ghost: placement ? { kind, placement } : null });
     },
     down(ed, input) {
-      const placement = placementFor(ed, kind, params, input);
+      // A stop track pressed near a saw station belongs to that saw; anything else goes where the pointer is.
+      const attached = attachNear(ed, kind, params, input.point);
+      const placement = attached?.placement ?? placementFor(ed, kind, params, input);
       if (!placement) return;
-      const fixture: FixtureDoc = { id: newId("fx"), kind, label: "", placement, params: structuredClone(params) };
+      const fixture: FixtureDoc = { id: newId("fx"), kind, label: "", placement, params: structuredClone(attached?.params ?? params) };
       ed.edit((doc) => addFixture(doc, fixture));
       ed.select([fixture.id]);
-      ed.announce(`Placed ${kind}.`);
+      ed.announce(attached ? `Placed ${kind} on ${ed.placed(String(attached.params.sawId))?.label ?? "the saw"}, ${String(attached.params.side)} of the blade.` : `Placed ${kind}.`);
       if (!input.shift) ed.tools.go(createIdle());
     },
     cancel(ed) {
