@@ -76,8 +76,23 @@ const NUMBERED = /-\d+$/;
 
 /** When a part is used in the build: its kind's template for the part's key, else the fixture's fallback step. */
 export function phaseOfPart(kind: string, partId: string, fixtureId: string): Phase {
-  const key = partId.slice(fixtureId.length + 1).replace(NUMBERED, "");
-  return (KIND_STEPS[kind] ?? []).find((t) => t.partKeys.includes(key))?.phase ?? (ANCHORED_KINDS.has(kind) ? "hang" : "assemble");
+  return templateOf(kind, partKeyOf(partId, fixtureId))?.phase ?? (ANCHORED_KINDS.has(kind) ? "hang" : "assemble");
+}
+
+/** A part's key in its kind: the id after "fixtureId:", without the "-2", "-3" of a second or third of a kind. */
+export const partKeyOf = (partId: string, fixtureId: string) => partId.slice(fixtureId.length + 1).replace(NUMBERED, "");
+
+const templateCache = new Map<string, StepTemplate | null>();
+
+/** The step template of a kind that names a part key (null: none does), looked up once per kind and key. */
+export function templateOf(kind: string, key: string): StepTemplate | null {
+  const k = `${kind}|${key}`;
+  let t = templateCache.get(k);
+  if (t === undefined) {
+    t = (KIND_STEPS[kind] ?? []).find((x) => x.partKeys.includes(key)) ?? null;
+    templateCache.set(k, t);
+  }
+  return t;
 }
 
 /** Parts used only after the stop track is fitted can be cut on it. */

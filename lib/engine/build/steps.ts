@@ -1,7 +1,7 @@
 import type { Part } from "../fixtures/types";
 import type { BuildStep, CutRow, FixtureLetter, Setup } from "./types";
 import type { Phase, StepTemplate } from "./step-templates";
-import { ANCHORED_KINDS, CAUTION_ANCHOR, CAUTION_LIFT, KIND_STEPS, PHASES, fallbackStep } from "./step-templates";
+import { ANCHORED_KINDS, CAUTION_ANCHOR, CAUTION_LIFT, KIND_STEPS, PHASES, fallbackStep, partKeyOf, templateOf } from "./step-templates";
 
 interface Draft {
   phase: Phase;
@@ -13,7 +13,6 @@ interface Draft {
   cuts: boolean;
 }
 
-const NUMBERED = /-\d+$/;
 const add = (m: Map<string, number>, label: string, qty: number) => m.set(label, (m.get(label) ?? 0) + qty);
 
 /**
@@ -66,9 +65,7 @@ export function buildSteps(letters: readonly FixtureLetter[], parts: readonly Pa
     }
     let fallback: StepTemplate | undefined;
     for (const p of ps) {
-      // Part ids are fixtureId:partKey with "-2", "-3" for the second and third of a kind in one fixture.
-      const key = p.id.slice(p.fixtureId.length + 1).replace(NUMBERED, "");
-      const t = templates.find((x) => x.partKeys.includes(key)) ?? (fallback ??= fallbackStep(f.name, ANCHORED_KINDS.has(f.kind)));
+      const t = templateOf(f.kind, partKeyOf(p.id, p.fixtureId)) ?? (fallback ??= fallbackStep(f.name, ANCHORED_KINDS.has(f.kind)));
       add(draftOf(t).parts, labelOf.get(p.id) ?? "?", p.qty);
     }
     // Keep the templates' order within the fixture.
