@@ -53,9 +53,9 @@ export function SetupCard({ setup, progress, rows, fmt, onCut, next }: Props) {
                 type="button"
                 disabled={full}
                 onClick={() => onCut(it.item)}
-                aria-label={full ? `${it.label}: all ${it.total} cut` : `${it.label}: cut one more (${it.done} of ${it.total} cut)`}
                 className="min-h-14 min-w-24 rounded-lg bg-pine-700 px-3 text-lg font-bold text-white disabled:bg-pine-100 disabled:text-pine-700"
               >
+                <span className="sr-only">{it.label}: </span>
                 {full ? "Done" : "Cut +1"}
                 <span className="block text-sm font-semibold">
                   {it.done} of {it.total}

@@ -69,11 +69,18 @@ export function ShopFloor({ source, planName }: { source: ShopSource; planName: 
         <ProgressBar done={progress.overall.done} total={progress.overall.total} label="Whole build" />
       </header>
       <Cautions items={SHOP_CAUTIONS} title="Every time" />
-      {build.notes.map((n) => (
-        <p key={n} className="rounded-lg bg-amberline-100 px-3 py-2 text-base text-walnut-900">
-          {n}
-        </p>
-      ))}
+      {build.notes.length > 0 && (
+        <details className="rounded-lg bg-amberline-100 px-3 py-2 text-base text-walnut-900">
+          <summary className="min-h-10 cursor-pointer py-1 font-semibold">
+            {build.notes.length} note{build.notes.length === 1 ? "" : "s"} on the cut list
+          </summary>
+          <ul className="mt-1 list-disc space-y-1 pl-5">
+            {build.notes.map((n) => (
+              <li key={n}>{n}</li>
+            ))}
+          </ul>
+        </details>
+      )}
       <nav aria-label="Shop view sections" className="grid grid-cols-3 gap-2">
         {TABS.map((t) => (
           <button key={t.id} type="button" aria-pressed={tab === t.id} onClick={() => setTab(t.id)} className="min-h-14 rounded-lg border-2 border-walnut-700 text-xl font-bold text-walnut-900 aria-pressed:bg-walnut-700 aria-pressed:text-paper">

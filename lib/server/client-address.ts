@@ -4,7 +4,7 @@ import { env } from "./env";
 export const UNTRUSTED_ADDRESS = "direct";
 
 /** How many proxies in front of the app add to X-Forwarded-For: 0 when TRUST_PROXY is unset or false. */
-export function trustedHops(value = env().TRUST_PROXY): number {
+export function trustedHops(value: string | undefined): number {
   if (!value || value === "false") return 0;
   if (value === "true") return 1;
   return Math.min(20, Number(value) || 0);
@@ -19,7 +19,7 @@ const ADDRESS = /^[0-9a-f.:]{2,45}$/;
  * request counts as one address: Next answers behind its own server, and a client can put anything
  * in that header.
  */
-export function clientAddress(headers: Headers, hops = trustedHops()): string {
+export function clientAddress(headers: Headers, hops = trustedHops(env().TRUST_PROXY)): string {
   if (hops <= 0) return UNTRUSTED_ADDRESS;
   const entries = (headers.get("x-forwarded-for") ?? "").split(",").map((s) => s.trim().toLowerCase()).filter(Boolean);
   if (!entries.length) return UNTRUSTED_ADDRESS;

@@ -8,9 +8,14 @@ interface RequestScope {
   requestId: string;
 }
 
-const scope = new AsyncLocalStorage<RequestScope>();
+const g = globalThis as unknown as { __bwLog?: pino.Logger; __bwLogScope?: AsyncLocalStorage<RequestScope> };
 
-const g = globalThis as unknown as { __bwLog?: pino.Logger };
+/**
+ * One scope store per process, like the logger: the server bundles this module more than once (the
+ * instrumentation hook and the route bundles), and the logger's mixin must read the same store that
+ * route() writes, or request ids vanish from the log.
+ */
+const scope = (g.__bwLogScope ??= new AsyncLocalStorage<RequestScope>());
 
 /**
  * The server's logger: one JSON line per event, with the request id of the request it belongs to.
