@@ -1,7 +1,7 @@
 /**
  * Bundles the server's engine worker (lib/server/engine-pool/worker.ts with lib/engine/) into one
- * plain JS file inside a build folder, for piscina to load: Next bundles server code, so the pool
- * needs a real file on disk. Also bundles the shop view's service worker
+ * plain JS file, and the packet worker (lib/server/packet/worker.ts) into another ES module, inside
+ * a build folder, for piscina to load: Next bundles server code, so the pools need real files on disk. Also bundles the shop view's service worker
  * (lib/client/shop/service-worker.ts), which app/shop-sw.js serves from the same folder. Run after
  * `next build` by scripts/lib.sh build_app:
  *   tsx scripts/build-worker.ts <dist folder>
@@ -9,7 +9,7 @@
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
-import { WORKER_FILE_NAME } from "../lib/server/engine-pool/worker-file";
+import { PACKET_WORKER_FILE_NAME, WORKER_FILE_NAME } from "../lib/server/engine-pool/worker-file";
 import { SHOP_SW_FILE_NAME } from "../lib/server/shop-sw-file";
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
@@ -24,6 +24,29 @@ export async function buildEngineWorker(outFile: string): Promise<string> {
     platform: "node",
     target: "node20",
     format: "cjs",
+    tsconfig: "tsconfig.json",
+    legalComments: "none",
+    logLevel: "warning",
+  });
+  return outFile;
+}
+
+/**
+ * Writes the packet worker (lib/server/packet/worker.ts: the PDF pages and the engine) to `outFile`
+ * as an ES module. Packages stay outside the bundle and load from node_modules, so React and the
+ * PDF renderer are the one copy each that the rest of the server uses.
+ */
+export async function buildPacketWorker(outFile: string): Promise<string> {
+  await build({
+    absWorkingDir: ROOT,
+    entryPoints: ["lib/server/packet/worker.ts"],
+    outfile: outFile,
+    bundle: true,
+    packages: "external",
+    platform: "node",
+    target: "node20",
+    format: "esm",
+    jsx: "automatic",
     tsconfig: "tsconfig.json",
     legalComments: "none",
     logLevel: "warning",
@@ -58,6 +81,8 @@ if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.me
   }
   const out = await buildEngineWorker(path.resolve(ROOT, dist, WORKER_FILE_NAME));
   console.log(`engine worker bundled: ${path.relative(ROOT, out)}`);
+  const packet = await buildPacketWorker(path.resolve(ROOT, dist, PACKET_WORKER_FILE_NAME));
+  console.log(`packet worker bundled: ${path.relative(ROOT, packet)}`);
   const sw = await buildShopServiceWorker(path.resolve(ROOT, dist, SHOP_SW_FILE_NAME));
   console.log(`shop service worker bundled: ${path.relative(ROOT, sw)}`);
 }

@@ -13,6 +13,7 @@ import { BoardLayouts } from "./BoardLayouts";
 import { BuildPanel } from "./build/BuildPanel";
 import { LabelContext, type LabelState } from "./build/label-context";
 import { formatters } from "./format";
+import { planNestOptions } from "@/lib/engine/nesting/plan-nest";
 import type { OffcutInput } from "@/lib/engine/nesting/types";
 import { OffcutsForm } from "./OffcutsForm";
 import { PartsTable, type PartRow } from "./PartsTable";
@@ -63,7 +64,7 @@ export function PartsView({ plan }: { plan: PlanDocument }) {
     return parts.map((p) => ({ ...p, label: build.labelOf[p.id] ?? "", fixtureLabel: fixtureName.get(p.fixtureId) ?? p.fixtureId, materialName: names.get(p.materialId) ?? p.materialId }));
   }, [parts, plan.materials, build]);
   const [offcuts, setOffcuts] = useState<OffcutInput[]>([]);
-  const nestOptions = useMemo(() => ({ kerfMm: plan.settings.kerfMm, timeBudgetMs: 800, offcuts }), [plan.settings.kerfMm, offcuts]);
+  const nestOptions = useMemo(() => planNestOptions(plan.settings.kerfMm, { offcuts }), [plan.settings.kerfMm, offcuts]);
   const nesting = useNesting(parts, plan.materials, nestOptions);
   const boards = useMemo(() => planBoards(parts, plan.materials, { kerfMm: plan.settings.kerfMm }), [parts, plan.materials, plan.settings.kerfMm]);
   const prices = usePrices();

@@ -1,5 +1,6 @@
 import type { SheetLayout } from "@/lib/engine/nesting/types";
 import { useLabels } from "./build/label-context";
+import { cutMarks, cutSteps } from "@/lib/engine/nesting/cut-marks";
 import type { Formatters } from "./format";
 
 /**
@@ -102,40 +103,15 @@ export function SheetMap({ sheet, kerfMm, fmt, title }: { sheet: SheetLayout; ke
   );
 }
 
-/** Where to draw each cut and its number; numbers slide along their cut so they do not cover each other. */
-function cutMarks(sheet: SheetLayout, kerfMm: number, r: number) {
-  const placed: { cx: number; cy: number }[] = [];
-  return sheet.cuts.map((c) => {
-    const rip = c.kind === "rip";
-    const x1 = rip ? c.x1Mm : c.x1Mm + kerfMm / 2;
-    const y1 = rip ? c.y1Mm + kerfMm / 2 : c.y1Mm;
-    const x2 = rip ? c.x2Mm : c.x2Mm + kerfMm / 2;
-    const y2 = rip ? c.y2Mm + kerfMm / 2 : c.y2Mm;
-    let cx = x1 + (rip ? r : 0);
-    let cy = y1 + (rip ? 0 : r);
-    for (let i = 0; i < 20 && placed.some((p) => Math.hypot(p.cx - cx, p.cy - cy) < 2 * r); i++) {
-      if (rip) cx = Math.min(x2 - r, cx + 2.2 * r);
-      else cy = Math.min(y2 - r, cy + 2.2 * r);
-    }
-    placed.push({ cx, cy });
-    return { seq: c.seq, x1, y1, x2, y2, cx, cy, r };
-  });
-}
-
 /** The cut order in words, for the saw: "1. Rip the sheet 610 mm from the near edge". */
 export function CutList({ sheet, fmt }: { sheet: SheetLayout; fmt: Formatters }) {
   return (
     <ol className="mt-2 list-none columns-1 gap-6 text-xs text-walnut-700 sm:columns-2 lg:columns-3">
-      {sheet.cuts.map((c) => {
-        const rip = c.kind === "rip";
-        const width = rip ? c.y1Mm - sheet.usable.yMm : c.x1Mm - sheet.usable.xMm;
-        return (
-          <li key={c.seq} className="break-inside-avoid">
-            {c.seq}. {rip ? "Rip" : "Crosscut"} {c.level === 1 ? "the sheet" : c.level === 2 ? (rip ? "the piece" : "the strip") : "the piece"} at {fmt.len(rip ? c.y1Mm : c.x1Mm)} from the sheet&apos;s {rip ? "near edge" : "end"}
-            {c.level === 1 && width > 0 ? ` (${fmt.len(width)} past the trim)` : ""}
-          </li>
-        );
-      })}
+      {cutSteps(sheet, fmt.len).map((c) => (
+        <li key={c.seq} className="break-inside-avoid">
+          {c.seq}. {c.text}
+        </li>
+      ))}
     </ol>
   );
 }

@@ -11,6 +11,7 @@ import type { RuleNumbers } from "@/lib/engine/checks/numbers";
 import type { Finding } from "@/lib/engine/checks/types";
 import { derivePlan } from "@/lib/engine/derive";
 import { planDrawingsOrNull, type PlanDrawings } from "@/lib/engine/drawings/plan-drawings";
+import { planNestOptions } from "@/lib/engine/nesting/plan-nest";
 import { PLAN_LIMITS } from "@/lib/engine/plan/limits";
 import type { PlanDocument } from "@/lib/engine/plan/schema";
 import { partsCsv, shoppingCsv } from "@/lib/engine/shopping/csv";
@@ -48,13 +49,13 @@ export interface ShoppingCsvInput {
   wasteAllowancePct?: number;
 }
 
-/** The plan's priced shopping list as CSV text (a fixed seed and attempt cap: the same file on every download). */
+/** The plan's priced shopping list as CSV text (the plan's nest: the same sheets as the screen and the packet, on every download). */
 export function shoppingCsvTask(input: ShoppingCsvInput): string {
   const { plan } = input;
   const d = derivePlan(plan);
   const r = materialsReport(d.parts, d.hardware, plan.materials, input.prices, {
     kerfMm: plan.settings.kerfMm,
-    nest: { seed: 1, maxAttempts: 120 },
+    nest: planNestOptions(plan.settings.kerfMm),
     shopping: { wasteAllowancePct: input.wasteAllowancePct },
   });
   return shoppingCsv(r.shopping);

@@ -5,9 +5,12 @@ import path from "node:path";
 /** Name of the bundled worker inside the build folder (scripts/build-worker.ts writes it). */
 export const WORKER_FILE_NAME = "engine-worker.cjs";
 
+/** Name of the packet worker bundle (the build packet's PDF), beside the engine worker. */
+export const PACKET_WORKER_FILE_NAME = "packet-worker.mjs";
+
 /** Where the worker bundle of the running build is: inside BW_DIST_DIR (or .next), from the working folder. */
-export function workerFilePath(): string {
-  return path.resolve(process.cwd(), process.env.BW_DIST_DIR ?? ".next", WORKER_FILE_NAME);
+export function workerFilePath(name = WORKER_FILE_NAME): string {
+  return path.resolve(process.cwd(), process.env.BW_DIST_DIR ?? ".next", name);
 }
 
 /**

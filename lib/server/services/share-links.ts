@@ -61,6 +61,8 @@ export async function revokeLink(em: EntityManager, user: User, planId: string, 
 
 export interface SharedPlan {
   name: string;
+  /** The plan's saved version (the revision a printed packet names). */
+  version: number;
   ownerName: string;
   updatedAt: string;
   document: PlanDocument;
@@ -83,7 +85,7 @@ export async function openShared(em: EntityManager, token: string, opts: { recor
     await em.getConnection().execute(`update "share_link" set "open_count" = "open_count" + 1, "last_opened_at" = now() where "id" = ?`, [link.id]);
   }
   const p = link.plan;
-  return { name: p.name, ownerName: p.owner.name, updatedAt: p.updatedAt.toISOString(), document: p.document as unknown as PlanDocument, copiedFrom: p.copiedFrom ?? null };
+  return { name: p.name, version: p.version, ownerName: p.owner.name, updatedAt: p.updatedAt.toISOString(), document: p.document as unknown as PlanDocument, copiedFrom: p.copiedFrom ?? null };
 }
 
 /** Copies a shared plan into the signed-in account, noting where it came from. */
