@@ -1,4 +1,5 @@
 import { useId } from "react";
+import type { ScaleBar } from "@/lib/engine/drawings/scale-bar";
 import type { Drawing, DrawingShape } from "@/lib/engine/drawings/types";
 import { DIMENSION_INK, HALO, HIGHLIGHT, MARK_STYLES, TEXT_COLOURS } from "./drawing-palette";
 
@@ -19,15 +20,20 @@ interface Props {
   /** Smallest text, CSS px: the drawing keeps at least the width that gives it (scroll the box around it on small screens). */
   minTextPx?: number;
   className?: string;
+  /** A scale bar under the drawing (the downloadable files carry one). */
+  scale?: ScaleBar;
+  /** A file of its own (the SVG downloads): the XML namespace and a size in millimetres at 1:50, no page styles. */
+  standalone?: boolean;
 }
 
 /**
  * Draws an engine drawing as SVG. It only maps drawing objects to SVG elements: every point, text
  * position and dimension comes from the engine (lib/engine/drawings), in sheet mm.
  */
-export function DrawingSvg({ drawing, highlight = [], showKeepClear = true, photo, minTextPx = 11, className = "" }: Props) {
+export function DrawingSvg({ drawing, highlight = [], showKeepClear = true, photo, minTextPx = 11, className = "", scale, standalone = false }: Props) {
   const id = useId();
-  const { bounds: b, textSizeMm: size } = drawing;
+  const { textSizeMm: size } = drawing;
+  const b = scale?.bounds ?? drawing.bounds;
   const lit = new Set(highlight);
   const shown = (s: DrawingShape) => !s.layer || showKeepClear || (s.ref !== undefined && lit.has(s.ref));
   const width = b.maxX - b.minX;
@@ -53,8 +59,9 @@ export function DrawingSvg({ drawing, highlight = [], showKeepClear = true, phot
       role="img"
       aria-labelledby={`${id}-t`}
       aria-describedby={`${id}-d`}
-      className={className}
-      style={{ minWidth: `${Math.round((width / size) * minTextPx)}px` }}
+      {...(standalone
+        ? { xmlns: "http://www.w3.org/2000/svg", width: `${Math.round(width / 5) / 10}mm`, height: `${Math.round((b.maxY - b.minY) / 5) / 10}mm`, fontFamily: "Inter, Arial, sans-serif" }
+        : { className, style: { minWidth: `${Math.round((width / size) * minTextPx)}px` } })}
       data-drawing={drawing.kind}
       data-wall={drawing.wallId}
     >
@@ -96,6 +103,22 @@ export function DrawingSvg({ drawing, highlight = [], showKeepClear = true, phot
           ))}
         </g>
       ))}
+      {scale && <ScaleBarMarks bar={scale} />}
     </svg>
+  );
+}
+
+/** The scale bar: alternate filled and empty segments and the bar's length in words. */
+function ScaleBarMarks({ bar }: { bar: ScaleBar }) {
+  const seg = bar.lengthMm / bar.segments;
+  return (
+    <g data-scale-bar={bar.lengthMm} stroke={DIMENSION_INK} strokeWidth={bar.sizeMm * 0.05}>
+      {Array.from({ length: bar.segments }, (_, i) => (
+        <rect key={i} x={bar.at.x + i * seg} y={bar.at.y} width={seg} height={bar.heightMm} fill={i % 2 ? HALO : DIMENSION_INK} />
+      ))}
+      <text x={bar.textAt.x} y={bar.textAt.y} fontSize={bar.sizeMm * 0.85} dominantBaseline="central" fill={DIMENSION_INK} stroke="none">
+        {`0 to ${bar.text}`}
+      </text>
+    </g>
   );
 }

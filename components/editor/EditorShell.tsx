@@ -12,6 +12,7 @@ import { ConflictDialog, RestoreBanner } from "./SaveDialogs";
 import { SaveIndicator } from "./SaveIndicator";
 import { SidePanel } from "./SidePanel";
 import { Toolbar } from "./Toolbar";
+import { PlanFiles } from "@/components/packet/PlanFiles";
 import { useEditorSession, type PlanInit } from "./useEditorSession";
 import { useShortcuts } from "./useShortcuts";
 import { ViewBar } from "./ViewBar";
@@ -65,6 +66,7 @@ function EditorLayout({ plan, editor, saver, api }: { plan: PlanInit } & ReturnT
           <Link href={`/plans/${plan.id}/shop`} className="rounded border border-walnut-300 px-2 py-0.5 text-xs text-walnut-900 hover:bg-walnut-100" data-testid="shop-link">
             At the saw (phone view)
           </Link>
+          <PlanFiles planId={plan.id} walls={plan.document.room.walls} />
           <div className="ml-auto">
             <Toolbar />
           </div>

@@ -1,12 +1,15 @@
 import { Document } from "@react-pdf/renderer";
 import type { PacketData } from "@/lib/server/packet/types";
 import { BoardPlanSection } from "./BoardPlanSection";
+import { BuildOrderSection } from "./BuildOrderSection";
 import { CautionsSection } from "./CautionsSection";
 import { ChecksSection } from "./ChecksSection";
 import { CoverSection } from "./CoverSection";
 import { PartsSection } from "./PartsSection";
+import { SetupsSection } from "./SetupsSection";
 import { SheetMapsSection } from "./SheetMapsSection";
 import { ShoppingSection } from "./ShoppingSection";
+import { StopTableSection } from "./StopTableSection";
 import { WallsSection } from "./WallsSection";
 
 /** The build packet, section by section, in the order a build uses them. */
@@ -19,6 +22,9 @@ export function PacketDocument({ data }: { data: PacketData }) {
       <PartsSection data={data} />
       <SheetMapsSection data={data} />
       <BoardPlanSection data={data} />
+      <SetupsSection data={data} />
+      <StopTableSection data={data} />
+      <BuildOrderSection data={data} />
       <ShoppingSection data={data} />
       <CautionsSection data={data} />
     </Document>

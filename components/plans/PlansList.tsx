@@ -4,6 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { plansApi, type PlanRow } from "./api";
+import { ImportPlan } from "./ImportPlan";
 import { PlanCard } from "./PlanCard";
 
 /** My plans: create, rename, duplicate, delete with undo; newest change first. */
@@ -41,6 +42,7 @@ export function PlansList() {
           {create.isPending ? "Creating…" : "Create plan"}
         </button>
       </form>
+      <ImportPlan onImported={(id) => router.push(`/plans/${id}`)} />
       {problem && <p role="alert" className="rounded-md bg-brick-100 px-3 py-2 text-sm text-brick-700">{problem}</p>}
       {undo && (
         <div role="status" className="flex items-center gap-3 rounded-md bg-walnut-700 px-4 py-2 text-sm text-paper">

@@ -1,5 +1,8 @@
 import { beforeAll, describe, expect, it } from "vitest";
+import { buildFromPlan } from "@/lib/engine/build";
 import { demoPlan } from "@/lib/engine/demo/demo-plan";
+import { parsePlan } from "@/lib/engine/plan/parse";
+import { formatLength } from "@/lib/engine/units/format-length";
 import { Client, hasServer } from "./helpers/client";
 import { pdfPages } from "./helpers/pdf";
 import { addMember, cast, type Cast } from "./helpers/sharing";
@@ -42,7 +45,7 @@ describe.skipIf(!hasServer)("build packet PDF", () => {
     expect(pages[0]).toContain("Still open");
     expect(pages[0]).toMatch(/revision 1/);
     const all = pages.join("\n");
-    for (const heading of ["Elevation of", "Checks", "Parts list", "Board plan", "Shopping list", "Cautions"]) expect(all).toContain(heading);
+    for (const heading of ["Elevation of", "Checks", "Parts list", "Board plan", "Setup sheets", "Stop table", "Build order", "Shopping list", "Cautions"]) expect(all).toContain(heading);
     expect(all).toMatch(/sheet 1 of \d+/);
     expect(bytes).toBeGreaterThan(20_000);
   });
@@ -55,12 +58,23 @@ describe.skipIf(!hasServer)("build packet PDF", () => {
     });
   });
 
-  it("lists every part line with its label and prints each label on the sheet maps or board plan", () => {
-    const partsPages = pages.filter((p) => p.includes("Parts list"));
-    const text = partsPages.join("\n");
-    // The demo's run of base cabinets: sides and bottoms of 3/4 in ply.
-    expect(text).toMatch(/Side/);
-    expect(text).toMatch(/\b1\b/);
+  it("lists every part with its label, and the stop table's rows", () => {
+    const parsed = parsePlan(demoPlan());
+    if (!parsed.ok) throw new Error("demo plan does not parse");
+    const build = buildFromPlan(parsed.plan);
+    expect(build.rows.length).toBeGreaterThan(10);
+    const parts = pages.filter((p) => p.includes("Parts list")).join("\n");
+    for (const r of build.rows) expect(parts).toMatch(new RegExp(`(^|\\s)${r.label}(\\s|$)`, "m"));
+    const stops = pages.filter((p) => p.includes("Stop table")).join("\n");
+    expect(build.stopTables.length).toBeGreaterThan(0);
+    const len = (mm: number) => formatLength(mm, { units: parsed.plan.settings.units, precision: parsed.plan.settings.precision });
+    for (const t of build.stopTables) {
+      expect(stops).toContain(`Stop track ${t.letter}`);
+      for (const r of t.rows) expect(stops).toContain(len(r.cutLengthMm));
+    }
+    const all = pages.join("\n");
+    expect(all).toContain("Setup sheets");
+    expect(all).toContain("Build order");
   });
 
   it("names the checks' sources and ends with cautions that defer to codes and manuals", () => {
@@ -109,5 +123,39 @@ describe.skipIf(!hasServer)("build packet PDF", () => {
     const id = links.body.links[0].id as string;
     expect((await c.owner.client.del(`/api/v1/plans/${planId}/links/${id}`)).status).toBe(200);
     expect((await anon.raw(`/api/v1/shared/${token}/packet.pdf`)).status).toBe(404);
+  });
+
+  it("downloads the plan view and each wall elevation as SVG files with a scale bar", async () => {
+    const plan = await c.viewer.client.raw(`/api/v1/plans/${planId}/drawings/plan.svg`);
+    expect(plan.status).toBe(200);
+    expect(plan.headers.get("content-type")).toBe("image/svg+xml; charset=utf-8");
+    expect(plan.headers.get("content-disposition")).toBe('attachment; filename="packet-test-shop-plan.svg"');
+    const svg = await plan.text();
+    expect(svg).toMatch(/^<\?xml/);
+    expect(svg).toContain('xmlns="http://www.w3.org/2000/svg"');
+    expect(svg).toContain("data-scale-bar");
+    expect(svg).toMatch(/data-chain="overall"/);
+    const wallId = demoPlan().room.walls[0].id;
+    const wall = await c.owner.client.raw(`/api/v1/plans/${planId}/drawings/walls/${wallId}.svg`);
+    expect(wall.status).toBe(200);
+    expect(await wall.text()).toContain(`data-wall="${wallId}"`);
+    expect((await c.owner.client.raw(`/api/v1/plans/${planId}/drawings/walls/no-such-wall.svg`)).status).toBe(404);
+    expect((await c.owner.client.raw(`/api/v1/plans/${planId}/drawings/walls/${wallId}.png`)).status).toBe(404);
+    expect((await c.stranger.client.raw(`/api/v1/plans/${planId}/drawings/plan.svg`)).status).toBe(404);
+    expect((await new Client().raw(`/api/v1/plans/${planId}/drawings/plan.svg`)).status).toBe(401);
+  });
+
+  it("exports a plan, imports it as a new plan and exports the same document again", async () => {
+    const first = await c.owner.client.raw(`/api/v1/plans/${planId}/export`);
+    expect(first.status).toBe(200);
+    const file = await first.json();
+    const imported = await c.owner.client.post("/api/v1/plans/import", file);
+    expect(imported.status).toBe(201);
+    expect(imported.body.plan.id).not.toBe(planId);
+    const second = await (await c.owner.client.raw(`/api/v1/plans/${imported.body.plan.id}/export`)).json();
+    expect(second.format).toBe("benchwright-plan");
+    expect(second.document).toEqual(file.document);
+    // The original is untouched.
+    expect((await c.owner.client.get(`/api/v1/plans/${planId}`)).body.plan.version).toBe(1);
   });
 });

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ReadOnlyFindings } from "@/components/sharing/ReadOnlyFindings";
 import { CopyPlanButton } from "@/components/sharing/CopyPlanButton";
+import { PacketButton } from "@/components/packet/PacketButton";
 import { SharedParts } from "@/components/sharing/SharedParts";
 import { SharedPlanView } from "@/components/sharing/SharedPlanView";
 import { FIXTURE_KINDS } from "@/lib/engine/fixtures/registry";
@@ -45,6 +46,7 @@ export default async function SharedPlanPage({ params, searchParams }: Props) {
           <a href={`/s/${token}/shop`} className="rounded border border-walnut-300 px-3 py-1.5 text-sm text-walnut-900 hover:bg-walnut-100" data-testid="shop-link">
             At the saw (phone view)
           </a>
+          <PacketButton href={`/api/v1/shared/${encodeURIComponent(token)}/packet.pdf`} />
           <CopyPlanButton token={token} signedIn={!!user} prompt={sp.copy === "1" && !!user} />
         </div>
       </header>

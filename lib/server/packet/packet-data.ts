@@ -4,6 +4,7 @@
  * the PDF pages in components/packet/ lay this out and compute nothing.
  */
 import { planBoards } from "@/lib/engine/boards/plan-boards";
+import { buildPlan } from "@/lib/engine/build";
 import { evaluatePlan } from "@/lib/engine/checks/evaluate";
 import { RULES } from "@/lib/engine/checks/registry";
 import type { Finding } from "@/lib/engine/checks/types";
@@ -94,9 +95,9 @@ export function buildPacketData(input: PacketInput): PacketData {
   const findings = derived ? evaluatePlan(doc, derived, input.preset ? { preset: input.preset.numbers, presetLabel: input.preset.name } : {}) : [];
   const parts = derived?.parts ?? [];
   const hardware = derived?.hardware ?? [];
-  const materials = new Map(doc.materials.map((m) => [m.id, m.name]));
   const names = fixtureNames(doc);
   const list = planPartsList({ parts, hardware });
+  const build = buildPlan(doc, { parts, fixtures: derived?.fixtures });
   const nest = nestSheets(parts, doc.materials, planNestOptions(doc.settings.kerfMm));
   const boards = planBoards(parts, doc.materials, { kerfMm: doc.settings.kerfMm });
   const shopping = buildShoppingList({ parts, hardware, sheets: nest.materials, boards, materials: doc.materials }, input.prices, {});
@@ -127,19 +128,21 @@ export function buildPacketData(input: PacketInput): PacketData {
       top: open.filter((f) => f.severity !== "advice").slice(0, 8).map((f) => packetFinding(f, len)),
     },
     checks: checksOf(findings, len),
-    parts: list.lines.map((l, i) => ({
-      label: String(i + 1),
-      name: l.name,
-      qty: l.qty,
-      length: len(l.lengthMm),
-      width: len(l.widthMm),
-      thickness: len(l.thicknessMm),
-      material: materials.get(l.materialId) ?? l.materialId,
-      grain: l.grain,
-      notes: [...l.edges.map((e) => `edge: ${e}`), ...l.joinery].join("; "),
-      fixtures: l.fixtures.map((f) => `${names.get(f.fixtureId) ?? f.fixtureId}${f.qty > 1 ? ` x${f.qty}` : ""}`).join(", "),
+    parts: build.rows.map((r) => ({
+      label: r.label,
+      name: r.name,
+      qty: r.qty,
+      pieces: r.pieces,
+      length: len(r.lengthMm),
+      width: len(r.widthMm),
+      thickness: len(r.thicknessMm),
+      material: r.materialName,
+      grain: r.grain,
+      notes: [...r.edges.map((e) => `edge: ${e}`), ...r.joinery].join("; "),
+      fixtures: r.fixtures.map((f) => `${f.letter} ${names.get(f.fixtureId) ?? f.fixtureId}${f.qty > 1 ? ` x${f.qty}` : ""}`).join(", "),
     })),
-    partLabels: Object.fromEntries(list.lines.flatMap((l, i) => l.partIds.map((id) => [id, String(i + 1)]))),
+    build,
+    partLabels: build.labelOf,
     hardware: list.hardware.map((h) => ({ name: h.name, qty: h.unit === "mm" ? len(h.qty) : h.unit === "each" ? String(h.qty) : `${Math.round(h.qty * 100) / 100} ${h.unit}` })),
     sheets: nest.materials,
     boards,

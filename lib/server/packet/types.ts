@@ -1,4 +1,5 @@
 import type { BoardPlan } from "@/lib/engine/boards/types";
+import type { BuildResult } from "@/lib/engine/build";
 import type { RuleNumbers } from "@/lib/engine/checks/numbers";
 import type { Severity } from "@/lib/engine/checks/types";
 import type { PlanDrawings } from "@/lib/engine/drawings/plan-drawings";
@@ -55,6 +56,8 @@ export interface PacketPartLine {
   label: string;
   name: string;
   qty: number;
+  /** Pieces to saw when a part is glued up from layers (else qty). */
+  pieces: number;
   length: string;
   width: string;
   thickness: string;
@@ -94,7 +97,9 @@ export interface PacketData {
   summary: { conflicts: number; cautions: number; advice: number; passes: number; top: PacketFinding[] };
   checks: PacketCheck[];
   parts: PacketPartLine[];
-  /** The label of each part id (its parts-list line), for the sheet maps and board plan. */
+  /** The day at the saw: labelled cut list, setups in run order, stop tables and build steps (lib/engine/build). */
+  build: BuildResult;
+  /** The label of each part id (its cut-list row), for the sheet maps and board plan. */
   partLabels: Record<string, string>;
   hardware: { name: string; qty: string }[];
   sheets: MaterialNest[];

@@ -16,3 +16,6 @@ export async function packet(input: PacketInput): Promise<Uint8Array> {
 export function ping(): string {
   return "pong";
 }
+
+/** The plan view or a wall elevation as an SVG file, or null when there is no such drawing. */
+export { drawingFile } from "./drawing-file";
