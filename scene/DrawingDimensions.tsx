@@ -4,6 +4,7 @@ import { useThree } from "@react-three/fiber";
 import { memo, useEffect, useMemo, useState } from "react";
 import { OrthographicCamera } from "three";
 import { fittingDimensionTexts, liveTextSizeMm } from "@/lib/engine/drawings/dimension-texts";
+import { fixtureDistances, selectionElevationDimensions, selectionPlanDimensions } from "@/lib/engine/drawings/fixture-distances";
 import { planViewDimensions } from "@/lib/engine/drawings/plan-view";
 import { elevationSheetToRoom, planSheetToRoom, type RoomPoint } from "@/lib/engine/drawings/sheet-to-world";
 import type { DimensionLine, SheetPoint } from "@/lib/engine/drawings/types";
@@ -79,20 +80,45 @@ export function DrawingDimensions() {
   const doc = useDerived((s) => s.doc);
   const derived = useDerived((s) => s.derived);
   const size = useLiveTextSize();
+  const selected = selection.length === 1 ? selection[0] : null;
 
-  const drawn = useMemo(() => {
-    if (!doc || !derived || view === "orbit") return null;
+  // While a drag runs only the cheap dimensions follow it (wall lengths, the selection's gaps); the rest come back on release.
+  const dragging = useUi((s) => s.tool === "dragging");
+
+  const frameFor = useMemo(() => {
+    if (!derived || view === "orbit") return null;
     if (view === "plan") {
       const z = derived.room.ceilingHeightMm + 10;
-      return { dims: planViewDimensions(doc, derived, { detail: true, textSizeMm: size }), toRoom: (p: SheetPoint) => planSheetToRoom(p, z) };
+      return { wall: null, toRoom: (p: SheetPoint) => planSheetToRoom(p, z) };
     }
     const wall = derived.room.walls.find((w) => w.id === wallPick) ?? derived.room.walls[0];
-    const el = wall ? wallElevation(doc, derived, wall.id, { detail: true, textSizeMm: size }) : null;
-    if (!wall || !el) return null;
+    if (!wall) return null;
     const frame = frameOfWall(wall);
     // A little off the wall's face, into the room; the lines draw over the fixtures in any case.
-    return { dims: el.dimensions, toRoom: (p: SheetPoint) => elevationSheetToRoom(frame, p, 5) };
-  }, [doc, derived, view, wallPick, size]);
+    return { wall: frame, toRoom: (p: SheetPoint) => elevationSheetToRoom(frame, p, 5) };
+  }, [derived, view, wallPick]);
+
+  const base = useMemo(() => {
+    if (!doc || !derived || !frameFor) return [];
+    if (!frameFor.wall) return planViewDimensions(doc, derived, { detail: !dragging, textSizeMm: size });
+    return dragging ? [] : (wallElevation(doc, derived, frameFor.wall.wallId, { detail: true, textSizeMm: size })?.dimensions ?? []);
+  }, [doc, derived, frameFor, size, dragging]);
+
+  // The selected wall fixture's gaps to its neighbours and its size, drawn first and always shown.
+  const own = useMemo(() => {
+    if (!doc || !derived || !frameFor || !selected) return [];
+    const sel = fixtureDistances(doc, derived, selected);
+    if (!sel) return [];
+    const style = { sizeMm: size, format: (mm: number) => ed.formatLength(mm), chain: "selection" };
+    if (frameFor.wall) {
+      const zMin = derived.fixtures.find((f) => f.id === sel.fixtureId)?.body.zMin ?? 0;
+      return sel.wallId === frameFor.wall.wallId ? selectionElevationDimensions(sel, frameFor.wall, zMin, style) : [];
+    }
+    const w = derived.room.walls.find((x) => x.id === sel.wallId);
+    return w ? selectionPlanDimensions(sel, frameOfWall(w), style) : [];
+  }, [ed, doc, derived, frameFor, selected, size]);
+
+  const drawn = useMemo(() => (frameFor ? { dims: [...own, ...base], toRoom: frameFor.toRoom } : null), [frameFor, own, base]);
 
   const marks = useMemo(() => {
     if (!drawn) return null;

@@ -3,7 +3,6 @@ import { Canvas } from "@react-three/fiber";
 import type { Editor } from "@/lib/client/editor";
 import { EditorProvider } from "@/lib/client/react/EditorContext";
 import { CameraRig } from "./CameraRig";
-import { DimensionLines } from "./DimensionLines";
 import { DrawingDimensions } from "./DrawingDimensions";
 import { FrameCounter } from "./FrameCounter";
 import { Ghost, TapeLine } from "./GhostAndTape";
@@ -52,7 +51,6 @@ export default function EditorCanvas({ editor, label }: { editor: Editor; label:
             <SelectionOutline />
             <Ghost />
             <TapeLine />
-            <DimensionLines />
             <DrawingDimensions />
           </group>
           <PointerBridge />

@@ -7,6 +7,7 @@ import { setLabel, setParams } from "@/lib/client/store/fixture-ops";
 import { DerivedFacts } from "./DerivedFacts";
 import { StopTrackTable } from "./StopTrackTable";
 import { FixtureFindings } from "./FindingsList";
+import { FixtureDistances } from "./FixtureDistances";
 import { FixturePlacement } from "./PlacementFields";
 import { SchemaForm } from "./SchemaForm";
 import { TRACK_MOUNT_FIELDS, TrackMount } from "./TrackMount";
@@ -64,7 +65,10 @@ export function PropertiesPanel() {
           Placed from its saw: it moves when the saw or the counters beside it move.
         </p>
       ) : (
-        <FixturePlacement fixture={fixture} />
+        <>
+          <FixturePlacement fixture={fixture} />
+          <FixtureDistances fixture={fixture} />
+        </>
       )}
       {schema ? <SchemaForm key={fixture.id} idPrefix={fixture.id} schema={schema} value={fixture.params} hide={track ? (attached ? TRACK_HIDDEN_ATTACHED : TRACK_MOUNT_FIELDS) : NONE} onValid={(next) => ed.edit((d) => setParams(d, fixture.id, next))} /> : <p className="text-xs text-brick-700">Unknown fixture kind.</p>}
       <DerivedFacts id={fixture.id} />

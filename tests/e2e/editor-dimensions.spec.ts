@@ -3,7 +3,9 @@ import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { demoPlan } from "@/lib/engine/demo/demo-plan";
 import { derivePlan } from "@/lib/engine/derive";
+import { fixtureDistances, gapEndName } from "@/lib/engine/drawings/fixture-distances";
 import { formatLength } from "@/lib/engine/units/format-length";
+import { inches } from "@/lib/engine/units/length";
 import { signIn } from "./steps";
 
 /*
@@ -69,6 +71,28 @@ test("the demo plan's back wall in elevation shows the counter height and the sa
   await expect(level).toHaveCount(0);
   await page.getByRole("button", { name: "Dimensions", exact: true }).click();
   await expect(level).toHaveCount(1);
+
+  // Select the run's end cabinet (by its name in the outline, as the demo names it): its gaps and width show on the drawing and in the panel; typing a gap moves it, one undo step.
+  const end = fixtureDistances(plan, derived, "cab-4")!;
+  const offsetOf = () => page.evaluate(() => (window as unknown as { __bwEditor: { doc: { fixtures: { id: string; placement: { offsetMm?: number } }[] } } }).__bwEditor.doc.fixtures.find((f) => f.id === "cab-4")!.placement.offsetMm!);
+  const before = await offsetOf();
+  await page.getByTestId("outline-item").filter({ hasText: placed("cab-4").label }).click();
+  const own = dims.and(page.locator('[data-chain="selection"][data-ref="cab-4"]'));
+  await expect(own.and(page.locator('[data-note="Width"]'))).toHaveText(fmt(end.widthMm));
+  const leftNote = `[data-note="Gap on the left to ${gapEndName(end.left.to)}"]`;
+  await expect(own.and(page.locator(leftNote))).toHaveText(fmt(end.left.gapMm));
+  const gap = page.getByTestId("gap-left");
+  await expect(gap).toHaveValue(fmt(end.left.gapMm));
+  // Typed as the plan's own formatter writes 4 in.
+  const fourInches = inches(4);
+  await gap.fill(fmt(fourInches));
+  await gap.press("Enter");
+  await expect.poll(offsetOf).toBeCloseTo(before + end.left.gapMm - fourInches, 3);
+  await expect(own.and(page.locator(leftNote))).toHaveText(fmt(fourInches));
+  await page.screenshot({ path: "tests/artifacts/editor-dimensions-selection.png" });
+  // One undo step puts it back.
+  await page.getByRole("button", { name: "Undo", exact: true }).click();
+  await expect.poll(offsetOf).toBeCloseTo(before, 3);
 
   // Plan view: the walls' solved lengths.
   await page.getByRole("button", { name: "Plan", exact: true }).click();

@@ -4,8 +4,8 @@ import type { DimensionLine } from "./types";
 /** Dimension text is drawn at this share of the drawing's text height (as the SVG renderer draws it). */
 export const DIMENSION_TEXT_EM = 0.85;
 
-/** Which chains keep their text first when texts collide: the overall length, then what a person checks most. */
-const PRIORITY = ["overall", "levels", "fixture-heights", "gaps", "fixtures", "depths", "walkways", "blade-clear", "wall-hung", "heights", "openings"];
+/** Which chains keep their text first when texts collide: the selected fixture's, the overall length, then what a person checks most. */
+const PRIORITY = ["selection", "overall", "levels", "fixture-heights", "gaps", "fixtures", "depths", "walkways", "blade-clear", "wall-hung", "heights", "openings"];
 const rank = (chain: string) => {
   const i = PRIORITY.indexOf(chain);
   return i < 0 ? PRIORITY.length : i;
