@@ -67,6 +67,9 @@ export const planEntries: Entry[] = [
   { file: "v1/plans/[id]/export/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export` }), expect: planRead(200) },
   { file: "v1/plans/[id]/export/parts.csv/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export/parts.csv` }), expect: planRead(200) },
   { file: "v1/plans/[id]/build/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/build` }), expect: planRead(200) },
+  { file: "v1/plans/[id]/packet.pdf/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/packet.pdf` }), expect: planRead(200) },
+  { file: "v1/plans/[id]/drawings/plan.svg/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/drawings/plan.svg` }), expect: planRead(200) },
+  { file: "v1/plans/[id]/drawings/walls/[file]/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/drawings/walls/north.svg` }), expect: planRead(200) },
   { file: "v1/plans/[id]/export/shopping.csv/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/export/shopping.csv` }), expect: planRead(200) },
   { file: "v1/plans/[id]/progress/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/plans/${w.planId}/progress` }), expect: planRead(200) },
   {

@@ -50,6 +50,7 @@ export const sharingEntries: Entry[] = [
   },
   { file: "v1/shared/[token]/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/shared/${w.shareToken}` }), expect: everyone(200) },
   { file: "v1/shared/[token]/build/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/shared/${w.shareToken}/build` }), expect: everyone(200) },
+  { file: "v1/shared/[token]/packet.pdf/route.ts", method: "GET", call: (w) => ({ path: `/api/v1/shared/${w.shareToken}/packet.pdf` }), expect: everyone(200), note: "read-only packet for whoever holds a live link" },
   { file: "v1/shared/[token]/copy/route.ts", method: "POST", call: (w) => ({ path: `/api/v1/shared/${w.shareToken}/copy` }), expect: signedIn(201) },
   { file: "v1/account/reset/route.ts", method: "POST", call: () => ({ path: "/api/v1/account/reset", body: { email: someone() } }), expect: everyone(202) },
   { file: "v1/account/reset/confirm/route.ts", method: "POST", call: async () => ({ path: "/api/v1/account/reset/confirm", body: { token: await emailToken("reset"), password: "Hickory-and-ash-64" } }), expect: everyone(200), note: "the e-mailed token is the credential" },
