@@ -85,31 +85,10 @@ export function TrackMount({ fixture }: { fixture: FixtureDoc }) {
             ? "Detached: its saw is no longer in the plan. Choose a saw above."
             : "Detached: choose the saw it belongs to above."}
       </p>
-      {table.rows.length ? (
-        <table className="w-full text-xs tabular-nums" data-testid="track-stop-table">
-          <caption className="text-left font-semibold text-walnut-900">Stop table (from the blade)</caption>
-          <thead>
-            <tr className="text-left text-walnut-500">
-              <th scope="col">Cut</th>
-              <th scope="col">Stop from blade</th>
-              <th scope="col">Tape reads</th>
-            </tr>
-          </thead>
-          <tbody>
-            {table.rows.map((r, i) => (
-              <tr key={i} className={r.inReach ? "" : "text-brick-700"}>
-                <td>{f(r.cutLengthMm)}</td>
-                <td>{f(r.fromBladeMm)}</td>
-                <td>{r.inReach ? f(r.tapeReadingMm) : "off the track"}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      ) : (
-        <p className="text-xs text-walnut-500" data-testid="track-reach">
-          Stops set cuts from {f(table.minCutMm)} to {f(table.maxCutMm)} from the blade.
-        </p>
-      )}
+      {/* The stop table itself (plan crosscuts and typed lengths, with labels) is StopTrackTable, below these fields. */}
+      <p className="text-xs text-walnut-500" data-testid="track-reach">
+        Stops set cuts from {f(table.minCutMm)} to {f(table.maxCutMm)} from the blade.
+      </p>
     </fieldset>
   );
 }
