@@ -8,70 +8,32 @@
  */
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import { build } from "esbuild";
+import { build, type BuildOptions } from "esbuild";
 import { PACKET_WORKER_FILE_NAME, WORKER_FILE_NAME } from "../lib/server/engine-pool/worker-file";
 import { SHOP_SW_FILE_NAME } from "../lib/server/shop-sw-file";
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 
-/** Writes the worker bundle to `outFile` (CommonJS, Node 20); returns its path. */
-export async function buildEngineWorker(outFile: string): Promise<string> {
-  await build({
-    absWorkingDir: ROOT,
-    entryPoints: ["lib/server/engine-pool/worker.ts"],
-    outfile: outFile,
-    bundle: true,
-    platform: "node",
-    target: "node20",
-    format: "cjs",
-    tsconfig: "tsconfig.json",
-    legalComments: "none",
-    logLevel: "warning",
-  });
+/** One bundle of `entry` into `outFile` with the options every bundle here shares; returns its path. */
+async function bundle(entry: string, outFile: string, options: BuildOptions): Promise<string> {
+  await build({ absWorkingDir: ROOT, entryPoints: [entry], outfile: outFile, bundle: true, tsconfig: "tsconfig.json", legalComments: "none", logLevel: "warning", ...options });
   return outFile;
 }
+
+/** Writes the worker bundle to `outFile` (CommonJS, Node 20); returns its path. */
+export const buildEngineWorker = (outFile: string) => bundle("lib/server/engine-pool/worker.ts", outFile, { platform: "node", target: "node20", format: "cjs" });
 
 /**
  * Writes the packet worker (lib/server/packet/worker.ts: the PDF pages and the engine) to `outFile`
  * as an ES module. Packages stay outside the bundle and load from node_modules, so React and the
  * PDF renderer are the one copy each that the rest of the server uses.
  */
-export async function buildPacketWorker(outFile: string): Promise<string> {
-  await build({
-    absWorkingDir: ROOT,
-    entryPoints: ["lib/server/packet/worker.ts"],
-    outfile: outFile,
-    bundle: true,
-    packages: "external",
-    platform: "node",
-    target: "node20",
-    format: "esm",
-    jsx: "automatic",
-    tsconfig: "tsconfig.json",
-    legalComments: "none",
-    logLevel: "warning",
-  });
-  return outFile;
-}
+export const buildPacketWorker = (outFile: string) =>
+  bundle("lib/server/packet/worker.ts", outFile, { packages: "external", platform: "node", target: "node20", format: "esm", jsx: "automatic" });
 
 /** Writes the shop view's service worker (one classic script for the browser, minified). */
-export async function buildShopServiceWorker(outFile: string): Promise<string> {
-  await build({
-    absWorkingDir: ROOT,
-    entryPoints: ["lib/client/shop/service-worker.ts"],
-    outfile: outFile,
-    bundle: true,
-    platform: "browser",
-    target: "es2022",
-    format: "iife",
-    minify: true,
-    define: { "process.env.NODE_ENV": '"production"' },
-    tsconfig: "tsconfig.json",
-    legalComments: "none",
-    logLevel: "warning",
-  });
-  return outFile;
-}
+export const buildShopServiceWorker = (outFile: string) =>
+  bundle("lib/client/shop/service-worker.ts", outFile, { platform: "browser", target: "es2022", format: "iife", minify: true, define: { "process.env.NODE_ENV": '"production"' } });
 
 if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
   const dist = process.argv[2];
