@@ -1,7 +1,7 @@
 "use client";
 import { useMemo, useState } from "react";
 import type { CutRow } from "@/lib/engine/build";
-import { describeItem } from "@/lib/engine/shop/progress";
+import { describeItem, stepItem } from "@/lib/engine/shop/progress";
 import { formatLength } from "@/lib/engine/units/format-length";
 import type { ShopSource } from "@/lib/client/shop/local-store";
 import { useOfflineReady, useWakeLock } from "@/lib/client/shop/offline";
@@ -41,7 +41,9 @@ export function ShopFloor({ source, planName }: { source: ShopSource; planName: 
   const [tab, setTab] = useState<Tab>("cut");
   const [showAll, setShowAll] = useState(false);
   const answer = data.answer;
-  const fmt = useMemo(() => (answer ? (mm: number) => formatLength(mm, { units: answer.units, precision: answer.precision }) : (mm: number) => `${Math.round(mm)} mm`), [answer]);
+  const units = answer?.units ?? "mm";
+  const precision = answer?.precision ?? 16;
+  const fmt = useMemo(() => (mm: number) => formatLength(mm, { units, precision }), [units, precision]);
   const rows = useMemo(() => new Map<string, CutRow>((answer?.build.rows ?? []).map((r) => [r.label, r])), [answer]);
 
   if (!answer || !data.progress) {
@@ -57,6 +59,9 @@ export function ShopFloor({ source, planName }: { source: ShopSource; planName: 
   const { build } = answer;
   const progress = data.progress;
   const setupOf = new Map(build.setups.map((s) => [s.id, s]));
+  const stepOf = new Map(build.steps.map((st) => [st.id, st]));
+  const orderOf = (id: string) => setupOf.get(id)?.order ?? stepOf.get(id)?.order;
+  const stepDone = new Map(progress.steps.map((p) => [p.stepId, p.done]));
   const nextIndex = progress.setups.findIndex((s) => s.setupId === progress.nextSetupId);
   const shown = showAll ? progress.setups : progress.setups.filter((_, i) => i === nextIndex);
 
@@ -101,11 +106,14 @@ export function ShopFloor({ source, planName }: { source: ShopSource; planName: 
           </button>
           {!showAll && (
             <ol className="flex flex-col gap-2" aria-label="All setups in order">
-              {progress.setups.map((sp) => (
-                <li key={sp.setupId}>
-                  <ProgressBar done={sp.done} total={sp.total} label={`${setupOf.get(sp.setupId)?.order ?? ""}. ${setupOf.get(sp.setupId)?.title ?? sp.setupId}`} />
-                </li>
-              ))}
+              {progress.setups.map((sp) => {
+                const setup = setupOf.get(sp.setupId);
+                return (
+                  <li key={sp.setupId}>
+                    <ProgressBar done={sp.done} total={sp.total} label={setup ? `${setup.order}. ${setup.title}` : sp.setupId} />
+                  </li>
+                );
+              })}
             </ol>
           )}
         </div>
@@ -114,7 +122,7 @@ export function ShopFloor({ source, planName }: { source: ShopSource; planName: 
       {tab === "build" && (
         <div className="flex flex-col gap-4">
           {build.steps.map((st) => (
-            <StepCard key={st.id} step={st} done={progress.steps.find((p) => p.stepId === st.id)?.done ?? false} onDone={() => void data.checkOff(`step:${st.id}`)} setupTitle={(id) => setupOf.get(id)?.title ?? id} />
+            <StepCard key={st.id} step={st} done={stepDone.get(st.id) ?? false} onDone={() => void data.checkOff(stepItem(st.id))} setupTitle={(id) => setupOf.get(id)?.title ?? id} />
           ))}
         </div>
       )}
@@ -136,7 +144,7 @@ export function ShopFloor({ source, planName }: { source: ShopSource; planName: 
       <div className="fixed inset-x-0 bottom-0 border-t-2 border-walnut-300 bg-paper p-3">
         <div className="mx-auto max-w-xl">
           <button type="button" onClick={() => void data.undo()} disabled={!data.lastItem} className="min-h-14 w-full rounded-lg border-2 border-walnut-700 bg-white text-lg font-bold text-walnut-900 disabled:border-walnut-100 disabled:text-walnut-500">
-            {data.lastItem ? `Undo last check-off (${describeItem(data.lastItem)})` : "Undo last check-off"}
+            {data.lastItem ? `Undo last check-off (${describeItem(data.lastItem, orderOf)})` : "Undo last check-off"}
           </button>
         </div>
       </div>

@@ -68,8 +68,12 @@ export function sumCounts(...lists: readonly (readonly { item: string; count?: n
   return out;
 }
 
-/** An orphaned item in words: which setup or step and which part, as recorded. */
-export function describeItem(item: string): string {
-  const [kind, a, b] = item.split(":");
-  return kind === "cut" ? `${b} cut at setup ${a}` : `step ${a}`;
+/**
+ * An item in words: which part at which setup, or which step. `orderOf` gives a setup's or step's
+ * number in the run order where the plan still has it; otherwise the recorded id is shown.
+ */
+export function describeItem(item: string, orderOf: (id: string) => number | undefined = () => undefined): string {
+  const [kind, a = "", b] = item.split(":");
+  const n = orderOf(a) ?? a;
+  return kind === "cut" ? `${b} cut at setup ${n}` : `step ${n}`;
 }

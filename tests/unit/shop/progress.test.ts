@@ -51,6 +51,8 @@ describe("shop-floor progress", () => {
     const p = shopProgress(build, sumCounts([{ item: gone, count: 2 }]));
     expect(p.orphans).toEqual([{ item: gone, count: 2 }]);
     expect(describeItem(gone)).toBe("Z9 cut at setup rip-99");
+    expect(describeItem(cutItem("rip-2", "A6"), (id) => (id === "rip-2" ? 2 : undefined))).toBe("A6 cut at setup 2");
+    expect(describeItem(stepItem("room-cut"), () => 1)).toBe("step 1");
   });
 
   it("item keys of the demo build fit the pattern the API accepts; others do not", () => {
